@@ -1,0 +1,29 @@
+// One append-only audit record: who changed what, when, with the state before and after.
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreationAttributes<AuditEntry>> {
+  declare id: CreationOptional<string>;
+  declare at: CreationOptional<Date>;
+  declare actorId: number | null;
+  declare action: string;
+  declare entity: string;
+  declare entityId: string | null;
+  declare before: unknown;
+  declare after: unknown;
+
+  static initModel(sequelize: Sequelize): void {
+    AuditEntry.init(
+      {
+        id: { type: DataTypes.BIGINT, primaryKey: true, autoIncrement: true },
+        at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+        actorId: { type: DataTypes.INTEGER, allowNull: true },
+        action: { type: DataTypes.TEXT, allowNull: false },
+        entity: { type: DataTypes.TEXT, allowNull: false },
+        entityId: { type: DataTypes.TEXT, allowNull: true },
+        before: { type: DataTypes.JSONB, allowNull: true },
+        after: { type: DataTypes.JSONB, allowNull: true },
+      },
+      { sequelize, tableName: 'audit_log', underscored: true, timestamps: false },
+    );
+  }
+}

@@ -1,0 +1,32 @@
+// Initialises every model on a Sequelize instance and declares the associations in one place.
+import { Sequelize } from 'sequelize';
+import { AuditEntry } from './audit-entry.js';
+import { Fridge } from './fridge.js';
+import { House } from './house.js';
+import { Site } from './site.js';
+import { User } from './user.js';
+import { UserSite } from './user-site.js';
+
+export { AuditEntry, Fridge, House, Site, User, UserSite };
+
+export function initModels(sequelize: Sequelize): void {
+  for (const model of [Site, User, UserSite, AuditEntry, House, Fridge]) model.initModel(sequelize);
+  User.belongsToMany(Site, { through: UserSite, as: 'sites', foreignKey: 'userId', otherKey: 'siteId' });
+  Site.belongsToMany(User, { through: UserSite, as: 'users', foreignKey: 'siteId', otherKey: 'userId' });
+  House.belongsTo(Site, { as: 'site', foreignKey: 'siteId' });
+  Fridge.belongsTo(Site, { as: 'site', foreignKey: 'siteId' });
+  Site.hasMany(House, { as: 'houses', foreignKey: 'siteId' });
+  Site.hasMany(Fridge, { as: 'fridges', foreignKey: 'siteId' });
+  AuditEntry.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+}
+
+/** Opens the application's connection pool (as the application role) with every model ready. */
+export function connectDatabase(url: string, options: { poolMax?: number } = {}): Sequelize {
+  const sequelize = new Sequelize(url, {
+    logging: false,
+    pool: { max: options.poolMax ?? 10, acquire: 10_000 },
+    dialectOptions: { application_name: 'vialyard' },
+  });
+  initModels(sequelize);
+  return sequelize;
+}
