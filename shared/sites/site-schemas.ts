@@ -1,0 +1,39 @@
+// Sites and their settings; every setting has a default so later features can add settings without migrations.
+import { z } from 'zod';
+
+export const siteSettingsSchema = z.object({
+  /** Extra doses planned on top of the birds counted, in percent. */
+  overagePercent: z.number().min(0).max(50).default(0),
+  /** Receiving warns when a lot went into a fridge later than this after arrival. */
+  storeWithinMinutes: z.number().int().min(1).max(24 * 60).default(30),
+  /** A fridge whose newest reading is older than this shows as "no recent data". */
+  staleDataHours: z.number().min(1).max(24 * 14).default(24),
+});
+
+export type SiteSettings = z.infer<typeof siteSettingsSchema>;
+
+function isTimeZone(zone: string): boolean {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: zone });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+export const siteInputSchema = z.object({
+  code: z.string().trim().toUpperCase().regex(/^[A-Z0-9-]{2,16}$/, '2–16 letters, digits or dashes.'),
+  name: z.string().trim().min(1, 'Enter a name.').max(120, 'At most 120 characters.'),
+  timeZone: z.string().trim().refine(isTimeZone, 'Not a time zone of the IANA database (e.g. America/Chicago).'),
+  settings: siteSettingsSchema.partial().default({}),
+});
+
+export type SiteInput = z.infer<typeof siteInputSchema>;
+
+export interface SiteView {
+  id: number;
+  code: string;
+  name: string;
+  timeZone: string;
+  settings: SiteSettings;
+}
