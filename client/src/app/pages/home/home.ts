@@ -1,0 +1,29 @@
+// The home page: a greeting and the cards for the user's roles (each feature adds its cards here).
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { MatChipsModule } from '@angular/material/chips';
+import { roleLabels } from '@shared/auth/roles.js';
+import { AuthStore } from '../../core/auth/auth-store';
+import { SitesCard } from './sites-card';
+import { UsersCard } from './users-card';
+
+@Component({
+  selector: 'vy-home',
+  imports: [MatChipsModule, SitesCard, UsersCard],
+  templateUrl: './home.html',
+  styleUrl: './home.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class Home {
+  private readonly auth = inject(AuthStore);
+  protected readonly user = this.auth.user;
+  protected readonly isAdmin = computed(() => {
+    this.user();
+    return this.auth.hasRole('admin');
+  });
+  protected readonly roleNames = computed(() => (this.user()?.roles ?? []).map((role) => roleLabels[role]));
+  protected readonly greeting = computed(() => {
+    const hour = new Date().getHours();
+    const part = hour < 12 ? 'Good morning' : hour < 18 ? 'Good afternoon' : 'Good evening';
+    return `${part}, ${this.user()?.name.split(' ')[0] ?? ''}`;
+  });
+}
