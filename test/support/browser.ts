@@ -1,0 +1,55 @@
+// Launches Debian's Chromium through playwright-core with flags that keep it off the network, and runs axe-core on pages.
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { existsSync, mkdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { join } from 'node:path';
+import { runtimeDir } from '../../database/scripts/runtime-dir.js';
+
+export const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+
+export async function launchBrowser(): Promise<Browser> {
+  if (!existsSync(chromiumPath)) {
+    throw new Error(`Chromium not found at ${chromiumPath}; install it with: apt-get install -y chromium`);
+  }
+  return chromium.launch({
+    executablePath: chromiumPath,
+    headless: true,
+    args: [
+      '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+      '--disable-component-update', '--disable-sync', '--disable-dev-shm-usage',
+      '--host-resolver-rules=MAP * ~NOTFOUND , EXCLUDE localhost , EXCLUDE 127.0.0.1',
+    ],
+  });
+}
+
+export function screenshotPath(name: string): string {
+  const dir = runtimeDir('artifacts', 'screenshots');
+  mkdirSync(dir, { recursive: true });
+  return join(dir, `${name}.png`);
+}
+
+const axePath = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
+
+export interface AxeViolation {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: { target: string[] }[];
+}
+
+/** Runs axe-core's WCAG 2.2 AA rules on the page and returns the serious and critical violations. */
+export async function seriousAccessibilityViolations(page: Page): Promise<AxeViolation[]> {
+  // A colour measured mid-fade fails contrast: let running animations finish first.
+  await page.evaluate(() => Promise.all(document.getAnimations().map((animation) => animation.finished.catch(() => undefined))));
+  await page.addScriptTag({ path: axePath });
+  const violations = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run(context: Document, options: object): Promise<{ violations: unknown[] }> } }).axe;
+    const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'] } });
+    return result.violations;
+  });
+  return (violations as AxeViolation[]).filter((v) => v.impact === 'serious' || v.impact === 'critical');
+}
+
+export function describeViolations(violations: AxeViolation[]): string {
+  return violations.map((v) => `${v.impact} ${v.id}: ${v.help} at ${v.nodes.map((n) => n.target.join(' ')).join('; ')}`).join('\n');
+}
