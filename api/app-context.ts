@@ -4,6 +4,7 @@ import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config.js';
 import type { PasswordHasher } from './auth/password-hasher.js';
+import type { Mailer } from './mail/mailer.js';
 
 export interface AppContext {
   config: Config;
@@ -12,4 +13,5 @@ export interface AppContext {
   pool: pg.Pool;
   logger: Logger;
   hasher: PasswordHasher;
+  mailer: Mailer;
 }

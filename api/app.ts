@@ -13,12 +13,13 @@ import { AppError } from './http/app-error.js';
 import { csrfCookieOnReads } from './http/csrf.js';
 import { errorHandler } from './http/error-handler.js';
 import { createSecureRouter, type SecureRouter } from './http/secure-router.js';
+import { outboxRoutes } from './outbox/outbox.routes.js';
 import { sitesRoutes } from './sites/sites.routes.js';
 import { usersRoutes } from './users/users.routes.js';
 
 /** Every feature's router; a new feature adds one line here. */
 function featureRouters(context: AppContext): SecureRouter[] {
-  return [usersRoutes(context), sitesRoutes(context), healthRoutes(context)];
+  return [usersRoutes(context), sitesRoutes(context), outboxRoutes(context), healthRoutes(context)];
 }
 
 function healthRoutes(context: AppContext): SecureRouter {

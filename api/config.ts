@@ -3,6 +3,8 @@ import { z } from 'zod';
 import { join } from 'node:path';
 import { projectRoot } from '../database/scripts/runtime-dir.js';
 
+const runtimeRoot = process.env.VIALYARD_RUNTIME_DIR ?? join(projectRoot, '.runtime');
+
 const boolean = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
 const schema = z.object({
@@ -19,6 +21,8 @@ const schema = z.object({
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   MAIL_FROM: z.string().default('Vialyard <no-reply@vialyard.invalid>'),
+  /** Where the fake mail server keeps what it caught (read by the admins' outbox page). */
+  MAIL_CAPTURE_DIR: z.string().default(join(runtimeRoot, 'mail')),
   UPLOADS_DIR: z.string().default(join(projectRoot, 'uploads')),
   CLIENT_DIST_DIR: z.string().default(join(projectRoot, 'dist', 'client', 'browser')),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),

@@ -5,6 +5,7 @@ import { connectDatabase } from '../database/models/index.js';
 import type { AppContext } from './app-context.js';
 import { PasswordHasher } from './auth/password-hasher.js';
 import type { Config } from './config.js';
+import { Mailer } from './mail/mailer.js';
 
 export function createContext(config: Config): AppContext {
   const logger = pino({ level: config.LOG_LEVEL, base: { app: 'vialyard' } });
@@ -17,9 +18,11 @@ export function createContext(config: Config): AppContext {
     pool,
     sequelize: connectDatabase(config.DATABASE_URL),
     hasher: new PasswordHasher(config.BCRYPT_COST),
+    mailer: new Mailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM }, logger),
   };
 }
 
 export async function closeContext(context: AppContext): Promise<void> {
+  context.mailer.close();
   await Promise.allSettled([context.sequelize.close(), context.pool.end()]);
 }

@@ -8,7 +8,6 @@ import { seedDemoScenario, demoAccounts } from '../database/seeders/demo-scenari
 import { prepareLocalEnvironment } from '../database/scripts/local-environment.js';
 import { ensureClientBuilt } from '../database/scripts/client-build.js';
 import { MissingPostgresError } from '../database/scripts/postgres-binaries.js';
-import { runtimeDir } from '../database/scripts/runtime-dir.js';
 
 const log = (line: string) => process.stdout.write(`[vialyard] ${line}\n`);
 
@@ -30,8 +29,8 @@ async function main(): Promise<void> {
     await seeding.close();
 
     if (process.env.VIALYARD_SKIP_CLIENT_BUILD !== "1") ensureClientBuilt(log);
-    const mail = await startFakeSmtp(runtimeDir('mail'), config.SMTP_PORT, config.SMTP_HOST);
-    log(`Fake mail server on ${config.SMTP_HOST}:${mail.port}; messages kept in ${runtimeDir('mail')}`);
+    const mail = await startFakeSmtp(config.MAIL_CAPTURE_DIR, config.SMTP_PORT, config.SMTP_HOST);
+    log(`Fake mail server on ${config.SMTP_HOST}:${mail.port}; messages kept in ${config.MAIL_CAPTURE_DIR} (admins: Outbox page)`);
     const server = await startServer(config);
 
     log(`Vialyard is running at ${server.url}`);

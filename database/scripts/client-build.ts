@@ -1,10 +1,12 @@
 // Builds the Angular client when its output is missing or older than any client or shared source file.
 import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { projectRoot } from './runtime-dir.js';
 
-export const clientIndex = join(projectRoot, 'dist', 'client', 'browser', 'index.html');
+/** CLIENT_DIST_DIR (the folder holding index.html) lets two checkouts' builds live apart. */
+const distDir = process.env.CLIENT_DIST_DIR ?? join(projectRoot, 'dist', 'client', 'browser');
+export const clientIndex = join(distDir, 'index.html');
 
 function newestChange(path: string): number {
   const stat = statSync(path);
@@ -21,7 +23,7 @@ export function clientIsStale(): boolean {
 
 export function buildClient(log: (line: string) => void): void {
   log('Building the client (Angular)...');
-  const result = spawnSync(join(projectRoot, 'node_modules', '.bin', 'ng'), ['build'], {
+  const result = spawnSync(join(projectRoot, 'node_modules', '.bin', 'ng'), ['build', '--output-path', dirname(distDir)], {
     cwd: projectRoot,
     stdio: 'inherit',
     env: { ...process.env, NG_CLI_ANALYTICS: 'false' },

@@ -122,4 +122,24 @@ describe('the client shell in Chromium', () => {
     await page.getByRole('heading', { name: 'Page not found' }).waitFor();
     await expectAccessible(page, 'not-found page');
   });
+  it('signs in and reaches the users page with the keyboard alone', async () => {
+    await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
+    const page = await context.newPage();
+    await page.goto(`${server.url}/sign-in`);
+    await page.keyboard.press('Tab');
+    await page.keyboard.type('admin@test.example');
+    await page.keyboard.press('Tab');
+    await page.keyboard.type(testPassword);
+    await page.keyboard.press('Enter');
+    await page.getByRole('navigation', { name: 'Main' }).waitFor();
+    // Tab from the top of the page until the Users link has focus, then follow it with Enter.
+    for (let i = 0; i < 12; i++) {
+      await page.keyboard.press('Tab');
+      const focused = await page.evaluate(() => document.activeElement?.textContent?.trim() ?? '');
+      if (focused.endsWith('Users') && focused.length < 20) break;
+    }
+    await page.keyboard.press('Enter');
+    await page.getByRole('table', { name: 'Users' }).waitFor();
+    expect(page.url()).to.match(/\/users$/);
+  });
 });

@@ -1,6 +1,10 @@
-// Mocha root hooks for the database suites: migrate before the first test, close connections after the last.
+// Mocha root hooks for the database suites: catch mail and migrate before the first test, close everything after the last.
 import { closeOwnerConnection, migrateTestDatabase } from './test-database.js';
 import { closeTestContext } from './test-app.js';
+import { startMailCatcher, stopMailCatcher } from './mail-catcher.js';
+
+// Before any spec file loads: some build the app at load time, and the app reads SMTP_PORT when it is built.
+await startMailCatcher();
 
 export const mochaHooks = {
   async beforeAll(this: Mocha.Context) {
@@ -10,5 +14,6 @@ export const mochaHooks = {
   async afterAll() {
     await closeTestContext();
     await closeOwnerConnection();
+    await stopMailCatcher();
   },
 };

@@ -21,6 +21,12 @@ export const routes: Routes = [
         title: 'Users · Vialyard',
         loadComponent: () => import('./pages/users'),
       },
+      {
+        path: 'outbox',
+        canActivate: [roleGuard('admin')],
+        title: 'Outbox · Vialyard',
+        loadComponent: () => import('./pages/outbox'),
+      },
       { path: 'account', title: 'My account · Vialyard', loadComponent: () => import('./pages/account') },
       { path: '**', title: 'Not found · Vialyard', loadComponent: () => import('./pages/not-found') },
     ],

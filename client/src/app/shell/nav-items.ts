@@ -11,5 +11,6 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { label: 'Home', icon: 'home', link: '/' },
   { label: 'Users', icon: 'group', link: '/users', roles: ['admin'] },
+  { label: 'Outbox', icon: 'outgoing_mail', link: '/outbox', roles: ['admin'] },
   { label: 'My account', icon: 'manage_accounts', link: '/account' },
 ];

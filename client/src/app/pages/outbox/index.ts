@@ -1,0 +1,1 @@
+export { Outbox as default } from './outbox';
