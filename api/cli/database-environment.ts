@@ -8,11 +8,11 @@ export interface CliDatabase {
   release(): void;
 }
 
-export async function openCliDatabase(): Promise<CliDatabase> {
+export async function openCliDatabase(options: { migrate?: boolean } = {}): Promise<CliDatabase> {
   if (process.env.DATABASE_URL && process.env.SESSION_SECRET) {
     return { config: readConfig(), release: () => {} };
   }
-  const local = await prepareLocalEnvironment({ name: 'demo', port: Number(process.env.VIALYARD_PG_PORT ?? 5544), database: 'vialyard' });
+  const local = await prepareLocalEnvironment({ name: 'demo', port: Number(process.env.VIALYARD_PG_PORT ?? 5544), database: 'vialyard', migrate: options.migrate });
   return {
     config: readConfig({ ...process.env, ...local.env }),
     release: () => {

@@ -6,6 +6,8 @@ const commands: Record<string, () => Promise<{ command: CliCommand }>> = {
   'parse-barcode': () => import('./commands/parse-barcode.js'),
   'analyze-log': () => import('./commands/analyze-log.js'),
   plan: () => import('./commands/plan.js'),
+  backup: () => import('./commands/backup.js'),
+  restore: () => import('./commands/restore.js'),
 };
 
 async function main(argv: string[]): Promise<number> {

@@ -23,12 +23,14 @@ export async function prepareLocalEnvironment(options: {
   port: number;
   database: string;
   throwaway?: boolean;
+  /** False for a restore, which needs the database empty. */
+  migrate?: boolean;
   log?: (line: string) => void;
 }): Promise<LocalEnvironment> {
   const cluster = new LocalCluster({ name: options.name, port: options.port, throwaway: options.throwaway, log: options.log });
   cluster.start();
   const credentials = await cluster.ensureDatabase(options.database);
-  const applied = await migrateUp(databaseUrl(credentials, 'owner'), credentials.appUser);
+  const applied = options.migrate === false ? [] : await migrateUp(databaseUrl(credentials, 'owner'), credentials.appUser);
   if (applied.length) options.log?.(`Applied ${applied.length} migration(s).`);
   return {
     cluster,

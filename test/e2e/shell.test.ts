@@ -126,6 +126,7 @@ describe('the client shell in Chromium', () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     const page = await context.newPage();
     await page.goto(`${server.url}/sign-in`);
+    await page.getByLabel('E-mail').waitFor();
     await page.keyboard.press('Tab');
     await page.keyboard.type('admin@test.example');
     await page.keyboard.press('Tab');

@@ -21,8 +21,8 @@ import { ApiError } from '../../core/http/api-error';
 export class SignIn {
   private readonly auth = inject(AuthStore);
   private readonly router = inject(Router);
-  /** Where to go after signing in (set by the guard that sent us here). */
-  readonly next = input<string>('/');
+  /** Where to go after signing in (set by the guard that sent us here; router input binding makes it undefined when absent). */
+  readonly next = input<string | undefined>();
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     email: ['', [Validators.required, Validators.email]],
@@ -42,7 +42,9 @@ export class SignIn {
     try {
       const { email, password } = this.form.getRawValue();
       await this.auth.signIn(email, password);
-      const target = this.next().startsWith('/') && !this.next().startsWith('//') ? this.next() : '/';
+      // Only paths inside the app: never an absolute or protocol-relative URL from the address bar.
+      const next = this.next() ?? '/';
+      const target = next.startsWith('/') && !next.startsWith('//') ? next : '/';
       await this.router.navigateByUrl(target);
     } catch (error) {
       this.failure.set(ApiError.from(error).message);
