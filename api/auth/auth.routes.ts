@@ -31,8 +31,8 @@ export function authRoutes(context: AppContext, passport: PassportInstance) {
     windowSeconds: config.SIGN_IN_WINDOW_SECONDS,
   });
 
+  // The XSRF cookie comes with every read (csrfCookieOnReads), this one included.
   router.get('/session', { public: true }, (req, res) => {
-    issueCsrfCookie(req, res);
     res.json({ user: req.user ?? null });
   });
 

@@ -1,0 +1,57 @@
+// With the CSP enforced (no bypass), the built client runs without a single policy violation, and its HTML has no inline script.
+import { expect } from 'chai';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Browser } from 'playwright-core';
+import { startServer, type RunningServer } from '../../api/server.js';
+import { launchBrowser } from '../support/browser.js';
+import { resetDatabase } from '../support/test-database.js';
+import { createTestUser, testConfig, testPassword } from '../support/test-app.js';
+
+describe('Content-Security-Policy in Chromium', () => {
+  let server: RunningServer;
+  let browser: Browser;
+
+  before(async function () {
+    this.timeout(60_000);
+    await resetDatabase();
+    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
+    browser = await launchBrowser();
+  });
+  after(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  it('the built index.html has no inline script', () => {
+    const html = readFileSync(join(server.context.config.CLIENT_DIST_DIR, 'index.html'), 'utf8');
+    const inline = [...html.matchAll(/<script(?![^>]*\bsrc=)[^>]*>/g)];
+    expect(inline, 'inline <script> tags').to.have.length(0);
+    expect(html).to.not.match(/\son[a-z]+=/i);
+  });
+
+  it('signing in and opening every admin page reports no CSP violation', async () => {
+    await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    const violations: string[] = [];
+    page.on('console', (message) => {
+      if (/Content Security Policy|Refused to/i.test(message.text())) violations.push(message.text());
+    });
+    await page.addInitScript(() => {
+      document.addEventListener('securitypolicyviolation', (event) => console.error(`Refused to load: CSP ${event.violatedDirective} ${event.blockedURI}`));
+    });
+    await page.goto(`${server.url}/`);
+    await page.getByLabel('E-mail').fill('admin@test.example');
+    await page.getByLabel('Password', { exact: true }).fill(testPassword);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await nav.waitFor();
+    for (const link of await nav.getByRole('link').all()) {
+      await link.click();
+      await page.waitForLoadState('networkidle');
+    }
+    expect(violations).to.deep.equal([]);
+    await context.close();
+  });
+});
