@@ -30,6 +30,8 @@ describe('Content-Security-Policy in Chromium', () => {
     expect(html).to.not.match(/\son[a-z]+=/i);
   });
 
+  beforeEach(resetDatabase);
+
   it('signing in and opening every admin page reports no CSP violation', async () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     const context = await browser.newContext();
@@ -52,6 +54,30 @@ describe('Content-Security-Policy in Chromium', () => {
       await page.waitForLoadState('networkidle');
     }
     expect(violations).to.deep.equal([]);
+    await context.close();
+  });
+  it('stored text with markup in it shows as text, and no script from it runs', async () => {
+    const hostile = '<img src=x onerror="window.__vyInjected=1"><script>window.__vyInjected=2</script>';
+    await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
+    const victim = await createTestUser({ email: 'odd@test.example', roles: ['crew'] });
+    await victim.update({ name: hostile });
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    let dialogs = 0;
+    page.on('dialog', (dialog) => {
+      dialogs++;
+      void dialog.dismiss();
+    });
+    await page.goto(`${server.url}/`);
+    await page.getByLabel('E-mail').fill('admin@test.example');
+    await page.getByLabel('Password', { exact: true }).fill(testPassword);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
+    await page.getByRole('cell', { name: 'odd@test.example' }).waitFor();
+    expect(await page.getByRole('cell', { name: hostile, exact: true }).count()).to.equal(1);
+    expect(await page.evaluate(() => (window as unknown as { __vyInjected?: number }).__vyInjected)).to.equal(undefined);
+    expect(await page.locator('table img').count()).to.equal(0);
+    expect(dialogs).to.equal(0);
     await context.close();
   });
 });
