@@ -5,6 +5,7 @@ const commands: Record<string, () => Promise<{ command: CliCommand }>> = {
   'create-user': () => import('./commands/create-user.js'),
   'parse-barcode': () => import('./commands/parse-barcode.js'),
   'analyze-log': () => import('./commands/analyze-log.js'),
+  'import-logs': () => import('./commands/import-logs.js'),
   plan: () => import('./commands/plan.js'),
   backup: () => import('./commands/backup.js'),
   restore: () => import('./commands/restore.js'),

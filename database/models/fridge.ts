@@ -10,6 +10,7 @@ export class Fridge extends Model<InferAttributes<Fridge>, InferCreationAttribut
   declare alarmLow: CreationOptional<number>;
   declare alarmHigh: CreationOptional<number>;
   declare alarmUnit: CreationOptional<'F' | 'C'>;
+  declare minMaxDisplay: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -25,6 +26,7 @@ export class Fridge extends Model<InferAttributes<Fridge>, InferCreationAttribut
         alarmLow: { type: DataTypes.DECIMAL(6, 2), allowNull: false, defaultValue: 35, get() { return Number(this.getDataValue('alarmLow')); } },
         alarmHigh: { type: DataTypes.DECIMAL(6, 2), allowNull: false, defaultValue: 45, get() { return Number(this.getDataValue('alarmHigh')); } },
         alarmUnit: { type: DataTypes.CHAR(1), allowNull: false, defaultValue: 'F' },
+        minMaxDisplay: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

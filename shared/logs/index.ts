@@ -20,6 +20,8 @@ export type { LogGap } from './log-gap.js';
 export { readingDurations, type ReadingDurations, type TimedReading } from './reading-durations.js';
 export { nominalIntervalMs } from './nominal-interval.js';
 export { findExcursions } from './find-excursions.js';
+export { excursionsAndGaps } from './excursions-and-gaps.js';
+export { mergeBackupReadings, type MergedReading, type MergedSeries, type SeriesReading } from './merge-backup-readings.js';
 export { weightedMean } from './weighted-mean.js';
 export {
   meanKineticTemperatureC,

@@ -10,6 +10,11 @@ import { parseTemperatureCell } from './parse-temperature-cell.js';
 import { TimestampParser } from './parse-timestamp.js';
 import { CellPicker } from './cell-picker.js';
 import { splitCsvLine } from './split-csv-line.js';
+import { isBlank } from './is-blank.js';
+
+/** Readings outside this span (in °C) are skipped: the database refuses them too. */
+export const PLAUSIBLE_LOW_C = -100;
+export const PLAUSIBLE_HIGH_C = 200;
 
 export interface LogReadResult {
   readonly layout: LogLayout;
@@ -57,7 +62,7 @@ export class LogReader {
     const line = ++this.lineCount;
     if (line <= this.layout.headerLine) return undefined;
     const body = text.charCodeAt(text.length - 1) === 13 ? text.slice(0, -1) : text;
-    if (body.trim() === '') return undefined;
+    if (isBlank(body)) return undefined;
     if (this.picker.pick(body)) return this.readCells(line);
     return this.tooShort(splitCsvLine(body, this.layout.delimiter), line);
   }
@@ -90,7 +95,12 @@ export class LogReader {
     } else at = this.parser.wallMs - this.parser.offsetMinutes * 60_000;
     if (at < this.latest && this.firstOutOfOrderLine === 0) this.firstOutOfOrderLine = line;
     if (at > this.latest) this.latest = at;
-    const reading: LogReading = { at, tempC: this.toCelsius(value), line };
+    const tempC = this.toCelsius(value);
+    // A cold-chain logger never records these; such a cell is a sentinel (e.g. -999) or a misread column.
+    if (!(tempC >= PLAUSIBLE_LOW_C && tempC <= PLAUSIBLE_HIGH_C)) {
+      return this.skip(line, `temperature '${tempText}' is outside what a logger records (${PLAUSIBLE_LOW_C} to ${PLAUSIBLE_HIGH_C} °C); row skipped`);
+    }
+    const reading: LogReading = { at, tempC, line };
     this.readings.push(reading);
     return reading;
   }

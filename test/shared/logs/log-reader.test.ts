@@ -45,6 +45,17 @@ describe('LogReader', () => {
     expect(reader.finish().readings).to.deep.equal(readLogText(text, { zone: 'Europe/Berlin' }).readings);
   });
 
+  it('skips a readable number no logger records, such as a -999 sentinel, naming its line', () => {
+    const reader = new LogReader({ ...LAYOUT, unit: 'C', headerLine: 1 });
+    reader.pushLine('Time,Temp °C');
+    reader.pushLine('2026-03-01 08:00,4');
+    expect(reader.pushLine('2026-03-01 08:10,-999')).to.equal(undefined);
+    reader.pushLine('2026-03-01 08:20,5');
+    const result = reader.finish();
+    expect(result.readings.map((r) => r.tempC)).to.deep.equal([4, 5]);
+    expect(result.warnings).to.deep.equal([{ line: 3, message: "temperature '-999' is outside what a logger records (-100 to 200 °C); row skipped" }]);
+  });
+
   it('refuses to finish with fewer than two readings', () => {
     const reader = new LogReader(LAYOUT);
     reader.pushLine('Serial: 9');

@@ -1,0 +1,1 @@
+export { DailyCheck as default } from './daily-check';

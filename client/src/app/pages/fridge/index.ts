@@ -1,0 +1,1 @@
+export { Fridge as default } from './fridge';

@@ -1,0 +1,1 @@
+export { Fridges as default } from './fridges';

@@ -1,0 +1,1 @@
+export { LogImport as default } from './log-import';

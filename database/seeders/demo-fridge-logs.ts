@@ -1,0 +1,141 @@
+// The demo's fridge logs: loggers, a few weeks of invented readings with one excursion and one gap, and daily checks.
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { DateTime } from 'luxon';
+import type { Sequelize } from 'sequelize';
+import { recordDailyCheck } from '../../api/daily-checks/daily-checks-service.js';
+import { importLogFile } from '../../api/log-imports/import-log-file.js';
+import { addCertificate } from '../../api/loggers/loggers-service.js';
+import { createPdf, pdfFonts, pdfToBuffer } from '../../api/pdf/pdf-document.js';
+import { celsiusToFahrenheit } from '../../shared/temperature/convert-temperature.js';
+import { Fridge, Logger, User } from '../models/index.js';
+import { projectRoot } from '../scripts/runtime-dir.js';
+
+const HOUR = 3_600_000;
+const DAY = 24 * HOUR;
+
+/** A small deterministic wobble, so the demo looks the same on every machine. */
+function wobble(seed: number): () => number {
+  let state = seed;
+  return () => {
+    state = (state * 1_103_515_245 + 12_345) % 2_147_483_648;
+    return state / 2_147_483_648 - 0.5;
+  };
+}
+
+interface Plan {
+  start: number;
+  end: number;
+  stepMinutes: number;
+  /** °C at an instant, or null to leave the reading out. */
+  temp: (at: number) => number | null;
+}
+
+function readings(plan: Plan): [number, number][] {
+  const out: [number, number][] = [];
+  for (let at = plan.start; at <= plan.end; at += plan.stepMinutes * 60_000) {
+    const t = plan.temp(at);
+    if (t !== null) out.push([at, t]);
+  }
+  return out;
+}
+
+/** A °F export with metadata lines and local times, the way many loggers write it. */
+function fahrenheitFile(serial: string, zone: string, rows: [number, number][]): string {
+  const lines = [`Logger serial,${serial}`, `Exported,${DateTime.now().setZone(zone).toFormat('yyyy-MM-dd HH:mm')}`, '', 'Date/Time,Temperature (°F),Battery (%)'];
+  for (const [at, c] of rows) lines.push(`${DateTime.fromMillis(at, { zone }).toFormat('yyyy-MM-dd HH:mm')},${celsiusToFahrenheit(c).toFixed(1)},87`);
+  return `${lines.join('\r\n')}\r\n`;
+}
+
+/** A °C export with `;`, decimal commas and day-first dates. */
+function celsiusFile(zone: string, rows: [number, number][]): string {
+  const lines = ['Datum;Uhrzeit;Temperatur [°C]'];
+  for (const [at, c] of rows) {
+    const local = DateTime.fromMillis(at, { zone });
+    lines.push(`${local.toFormat('dd.MM.yyyy')};${local.toFormat('HH:mm')};${c.toFixed(1).replace('.', ',')}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+async function certificatePdf(serial: string, calibrated: string): Promise<Buffer> {
+  const doc = createPdf({ title: `Calibration certificate ${serial} (demo)` });
+  doc.font(pdfFonts.bold).fontSize(18).text('Calibration certificate (demo)');
+  doc.font(pdfFonts.regular).fontSize(11).moveDown().text(`Logger serial: ${serial}`).text(`Calibrated on: ${calibrated}`).text('Result: within ±0.5 °C at 2, 5 and 8 °C (invented for the demo).');
+  return pdfToBuffer(doc);
+}
+
+/** Runs after the demo's other records exist; goes through the same services as the pages. */
+export async function seedDemoFridgeLogs(sequelize: Sequelize): Promise<void> {
+  const uploadsDir = process.env.UPLOADS_DIR ?? join(projectRoot, 'uploads');
+  const storage = await User.findOne({ where: { email: 'storage@larkmoor.example' } });
+  const byCode = async (code: string) => (await Fridge.findOne({ where: { code } }))!;
+  const now = Math.floor(Date.now() / (10 * 60_000)) * 10 * 60_000;
+  const dir = await mkdtemp(join(tmpdir(), 'vialyard-demo-'));
+  const put = async (logger: Logger, name: string, body: string) => {
+    const path = join(dir, name);
+    await writeFile(path, body);
+    await importLogFile(sequelize, { loggerId: logger.id, path, fileName: name, sizeBytes: Buffer.byteLength(body), actorId: storage?.id ?? null, source: 'upload', uploadsDir });
+  };
+  try {
+    // Larkmoor North's vaccine room fridge: three weekly files, a warm spell six days ago, a logger outage nine days ago.
+    const f1 = await byCode('LKN-F1');
+    const primary = await Logger.create({ fridgeId: f1.id, serial: 'LK1-0417', model: 'Probe logger in glycol bottle', role: 'primary', installedOn: '2025-02-03' });
+    const backup = await Logger.create({ fridgeId: f1.id, serial: 'LK1-B220', model: 'Min/max display logger', role: 'backup', installedOn: '2025-02-03' });
+    const noise = wobble(417);
+    const warm = { start: now - 6 * DAY + 2 * HOUR, end: now - 6 * DAY + 3.8 * HOUR };
+    const outage = { start: now - 9 * DAY, end: now - 9 * DAY + 8 * HOUR };
+    const base = (at: number) => 4.6 + 0.5 * Math.sin((at / DAY) * 2 * Math.PI) + noise() * 0.3;
+    const primaryTemp = (at: number) => {
+      if (at >= outage.start && at < outage.end) return null;
+      if (at >= warm.start && at <= warm.end) return 8.1 + 1.1 * Math.sin(((at - warm.start) / (warm.end - warm.start)) * Math.PI);
+      return base(at);
+    };
+    for (let week = 3; week >= 1; week--) {
+      // Each week's file ends just before the next begins, as a logger read out weekly gives them.
+      const rows = readings({ start: now - week * 7 * DAY, end: now - (week - 1) * 7 * DAY - (week === 1 ? HOUR : 10 * 60_000), stepMinutes: 10, temp: primaryTemp });
+      await put(primary, `LK1-0417-week-${4 - week}.csv`, fahrenheitFile('LK1-0417', 'America/Chicago', rows));
+    }
+    // The backup covered the first five hours of the outage.
+    const backupRows = readings({ start: outage.start - 2 * HOUR, end: outage.start + 5 * HOUR, stepMinutes: 30, temp: (at) => base(at) + 0.2 });
+    await put(backup, 'LK1-B220-outage.csv', fahrenheitFile('LK1-B220', 'America/Chicago', backupRows));
+    // Certificates: the primary's recalibration falls due in 45 days, inside the 60-day reminder.
+    const certify = async (logger: Logger, dueInDays: number) => {
+      const calibrated = DateTime.now().minus({ years: 2 }).plus({ days: dueInDays }).toISODate()!;
+      const path = join(dir, `${logger.serial}.pdf`);
+      const pdf = await certificatePdf(logger.serial, calibrated);
+      await writeFile(path, pdf);
+      const due = DateTime.now().plus({ days: dueInDays }).toISODate()!;
+      await addCertificate(sequelize, storage!.id, logger.id, { calibratedOn: calibrated, dueOn: due }, { path, originalName: `${logger.serial}-calibration.pdf`, size: pdf.length }, uploadsDir);
+    };
+    await certify(primary, 45);
+    await certify(backup, 400);
+
+    // The office fridge's logger stopped sending three days ago: "no recent data".
+    const f2 = await byCode('LKN-F2');
+    const office = await Logger.create({ fridgeId: f2.id, serial: 'LK2-0912', model: 'Probe logger', role: 'primary', installedOn: '2025-05-12' });
+    const officeNoise = wobble(912);
+    await certify(office, 520);
+    await put(office, 'LK2-0912.csv', fahrenheitFile('LK2-0912', 'America/Chicago', readings({ start: now - 17 * DAY, end: now - 3 * DAY, stepMinutes: 15, temp: () => 4.2 + officeNoise() * 0.6 })));
+
+    // Fennel Creek's brooder office fridge exports °C with decimal commas.
+    const f3 = await byCode('FCP-F1');
+    const brooder = await Logger.create({ fridgeId: f3.id, serial: 'FC1-3301', model: 'Probe logger', role: 'primary', installedOn: '2024-09-01' });
+    const brooderNoise = wobble(3301);
+    await certify(brooder, 300);
+    await put(brooder, 'FC1-3301.csv', celsiusFile('America/Denver', readings({ start: now - 10 * DAY, end: now - 2 * HOUR, stepMinutes: 15, temp: () => 5 + brooderNoise() * 0.8 })));
+
+    // Morning checks at both sites, none yet today at Larkmoor North.
+    for (let day = 13; day >= 0; day--) {
+      const check = async (fridge: Fridge, zone: string, hour: number, initials: string, current: number) => {
+        const at = DateTime.now().setZone(zone).startOf('day').minus({ days: day }).plus({ hours: hour, minutes: 5 });
+        if (at.toMillis() > Date.now()) return;
+        await recordDailyCheck(sequelize, storage!.id, { fridgeId: fridge.id, unit: 'F', current, min: current - 1.8, max: current + 2.1, initials, note: '', checkedAt: at.toISO()! });
+      };
+      if (day > 0) await check(f1, 'America/Chicago', 7, day % 3 ? 'GL' : 'RO', 40.1 + (day % 4) * 0.3);
+      await check(f3, 'America/Denver', 7, 'GL', 40.8 - (day % 3) * 0.4);
+    }
+  } finally {
+    await rm(dir, { recursive: true, force: true });
+  }
+}
