@@ -1,0 +1,1 @@
+export { Catalogue as default } from './catalogue';

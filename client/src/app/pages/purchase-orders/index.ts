@@ -1,0 +1,1 @@
+export { PurchaseOrders as default } from './purchase-orders';

@@ -1,0 +1,1 @@
+export { ReceiveShipment as default } from './receive-shipment';

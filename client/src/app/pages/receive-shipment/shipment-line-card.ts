@@ -1,0 +1,62 @@
+// One lot on the receiving form: what it is, its counts (intact follows the others until typed), acceptance and storage.
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, inject, input, output } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatExpansionModule } from '@angular/material/expansion';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import { MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { merge } from 'rxjs';
+import { controlMessage } from '../../core/forms/server-errors';
+import type { LineGroup } from './shipment-form';
+
+export interface PresentationChoice {
+  id: number;
+  label: string;
+  proposed: boolean;
+}
+
+@Component({
+  selector: 'vy-shipment-line-card',
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatSlideToggleModule, MatButtonModule, MatIconModule, MatExpansionModule],
+  templateUrl: './shipment-line-card.html',
+  styleUrl: './shipment-line-card.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ShipmentLineCard implements OnInit {
+  private readonly destroyRef = inject(DestroyRef);
+  readonly group = input.required<LineGroup>();
+  readonly index = input.required<number>();
+  readonly presentations = input.required<PresentationChoice[]>();
+  readonly fridges = input.required<{ id: number; code: string; name: string }[]>();
+  readonly refused = input(false);
+  readonly removed = output<void>();
+  protected readonly message = controlMessage;
+  protected readonly counts = [
+    { name: 'vialsExpected', label: 'Expected' },
+    { name: 'vialsIntact', label: 'Intact' },
+    { name: 'vialsBroken', label: 'Broken or damaged' },
+    { name: 'vialsMissing', label: 'Missing' },
+  ] as const;
+
+  ngOnInit(): void {
+    const c = this.group().controls;
+    // Intact = expected − broken − missing until the clerk types intact themselves.
+    merge(c.vialsExpected.valueChanges, c.vialsBroken.valueChanges, c.vialsMissing.valueChanges)
+      .pipe(takeUntilDestroyed(this.destroyRef))
+      .subscribe(() => {
+        if (!c.vialsIntact.dirty) c.vialsIntact.setValue(Math.max(0, (c.vialsExpected.value || 0) - (c.vialsBroken.value || 0) - (c.vialsMissing.value || 0)));
+      });
+  }
+
+  protected labelOf(id: number | null): string {
+    return this.presentations().find((p) => p.id === id)?.label ?? 'Choose the product and pack';
+  }
+
+  protected isProposed(id: number | null): boolean {
+    return this.presentations().find((p) => p.id === id)?.proposed ?? false;
+  }
+}

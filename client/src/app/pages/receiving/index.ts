@@ -1,0 +1,1 @@
+export { Receiving as default } from './receiving';

@@ -1,0 +1,1 @@
+export { ShipmentPage as default } from './shipment-page';
