@@ -8,6 +8,17 @@ export const siteSettingsSchema = z.object({
   storeWithinMinutes: z.number().int().min(1).max(24 * 60).default(30),
   /** A fridge whose newest reading is older than this shows as "no recent data". */
   staleDataHours: z.number().min(1).max(24 * 14).default(24),
+  /** How far ahead purchasing's projection plans the site's vaccinations, in days. */
+  projectionHorizonDays: z.number().int().min(7).max(730).default(180),
+  /** Lots on hand expiring within each of these many days are listed (ascending). */
+  expiryAlertDays: z
+    .array(z.number().int().min(1).max(730))
+    .min(1)
+    .max(5)
+    .refine((days) => days.every((d, i) => i === 0 || d > days[i - 1]!), 'List the windows in ascending order.')
+    .default([30, 60, 90]),
+  /** Days of margin taken off the order-by date on top of the supplier's lead time. */
+  reorderMarginDays: z.number().int().min(0).max(60).default(3),
 });
 
 export type SiteSettings = z.infer<typeof siteSettingsSchema>;

@@ -1,0 +1,1 @@
+export { Flock as default } from './flock';

@@ -1,0 +1,1 @@
+export { Flocks as default } from './flocks';

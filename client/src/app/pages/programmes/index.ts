@@ -1,0 +1,1 @@
+export { Programmes as default } from './programmes';

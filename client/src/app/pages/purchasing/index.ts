@@ -1,0 +1,1 @@
+export { Purchasing as default } from './purchasing';
