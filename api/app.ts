@@ -16,10 +16,45 @@ import { createSecureRouter, type SecureRouter } from './http/secure-router.js';
 import { outboxRoutes } from './outbox/outbox.routes.js';
 import { sitesRoutes } from './sites/sites.routes.js';
 import { usersRoutes } from './users/users.routes.js';
+import { catalogueRoutes } from './catalogue/catalogue.routes.js';
+import { photosRoutes } from './photos/photos.routes.js';
+import { purchaseOrdersRoutes } from './purchase-orders/purchase-orders.routes.js';
+import { shipmentsRoutes } from './shipments/shipments.routes.js';
+import { fridgesRoutes } from './fridges/fridges.routes.js';
+import { loggersRoutes } from './loggers/loggers.routes.js';
+import { logImportsRoutes } from './log-imports/log-imports.routes.js';
+import { readingsRoutes } from './readings/readings.routes.js';
+import { dailyChecksRoutes } from './daily-checks/daily-checks.routes.js';
+import { excursionsRoutes } from './excursions/excursions.routes.js';
+import { housesRoutes } from './houses/houses.routes.js';
+import { flocksRoutes } from './flocks/flocks.routes.js';
+import { programmesRoutes } from './programmes/programmes.routes.js';
+import { vaccinationsRoutes } from './vaccinations/vaccinations.routes.js';
+import { demandRoutes } from './demand/demand.routes.js';
 
 /** Every feature's router; a new feature adds one line here. */
 function featureRouters(context: AppContext): SecureRouter[] {
-  return [usersRoutes(context), sitesRoutes(context), outboxRoutes(context), healthRoutes(context)];
+  return [
+    usersRoutes(context),
+    sitesRoutes(context),
+    outboxRoutes(context),
+    healthRoutes(context),
+    catalogueRoutes(context),
+    purchaseOrdersRoutes(context),
+    shipmentsRoutes(context),
+    photosRoutes(context),
+    fridgesRoutes(context),
+    loggersRoutes(context),
+    logImportsRoutes(context),
+    readingsRoutes(context),
+    dailyChecksRoutes(context),
+    excursionsRoutes(context),
+    housesRoutes(context),
+    flocksRoutes(context),
+    programmesRoutes(context),
+    vaccinationsRoutes(context),
+    demandRoutes(context),
+  ];
 }
 
 function healthRoutes(context: AppContext): SecureRouter {
@@ -94,8 +129,9 @@ export function createApp(context: AppContext): Express {
   if (existsSync(join(dist, 'index.html'))) {
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
     // The client's own pages are public files; the data they show comes from guarded API routes.
+    // dotfiles: 'allow' because CLIENT_DIST_DIR may sit under a dot-folder such as .runtime.
     const client = createSecureRouter('');
-    client.get('/{*splat}', { public: true }, (_req, res) => res.sendFile(join(dist, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } }));
+    client.get('/{*splat}', { public: true }, (_req, res) => res.sendFile(join(dist, 'index.html'), { dotfiles: 'allow', headers: { 'Cache-Control': 'no-cache' } }));
     app.use(client.express);
   }
   app.use(errorHandler(logger));

@@ -53,6 +53,8 @@ async function main(): Promise<number> {
       BCRYPT_COST: '4',
       LOG_LEVEL: 'silent',
       VIALYARD_RUNTIME_DIR: runtimeDir(),
+      // Stored photos of a test run go to the runtime folder, never into the checkout's uploads/.
+      UPLOADS_DIR: runtimeDir('test-uploads'),
       NG_CLI_ANALYTICS: 'false',
     };
     const failures: string[] = [];

@@ -1,5 +1,6 @@
 // A poultry house on a site, where flocks are placed.
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { Site } from './site.js';
 
 export type Housing = 'cage' | 'aviary' | 'floor';
 
@@ -8,8 +9,13 @@ export class House extends Model<InferAttributes<House>, InferCreationAttributes
   declare siteId: number;
   declare name: string;
   declare housing: Housing;
+  /** Birds the house is built for (flocks feature); a hint, never a limit. */
+  declare capacity: CreationOptional<number | null>;
+  /** A house taken out of use keeps its flocks' history. */
+  declare active: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  declare site?: NonAttribute<Site>;
 
   static initModel(sequelize: Sequelize): void {
     House.init(
@@ -18,6 +24,8 @@ export class House extends Model<InferAttributes<House>, InferCreationAttributes
         siteId: { type: DataTypes.INTEGER, allowNull: false },
         name: { type: DataTypes.TEXT, allowNull: false },
         housing: { type: DataTypes.TEXT, allowNull: false },
+        capacity: { type: DataTypes.INTEGER, allowNull: true },
+        active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -6,8 +6,14 @@ import { House } from './house.js';
 import { Site } from './site.js';
 import { User } from './user.js';
 import { UserSite } from './user-site.js';
+import { initReceivingModels } from './receiving-models.js';
+import { initFridgeLogModels } from './fridge-log-models.js';
+import { initFlockModels } from './flock-models.js';
 
 export { AuditEntry, Fridge, House, Site, User, UserSite };
+export * from './receiving-models.js';
+export * from './fridge-log-models.js';
+export * from './flock-models.js';
 
 export function initModels(sequelize: Sequelize): void {
   for (const model of [Site, User, UserSite, AuditEntry, House, Fridge]) model.initModel(sequelize);
@@ -18,6 +24,9 @@ export function initModels(sequelize: Sequelize): void {
   Site.hasMany(House, { as: 'houses', foreignKey: 'siteId' });
   Site.hasMany(Fridge, { as: 'fridges', foreignKey: 'siteId' });
   AuditEntry.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+  initReceivingModels(sequelize);
+  initFridgeLogModels(sequelize);
+  initFlockModels(sequelize);
 }
 
 /** Opens the application's connection pool (as the application role) with every model ready. */

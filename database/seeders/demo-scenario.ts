@@ -2,6 +2,9 @@
 import type { Sequelize } from 'sequelize';
 import type { Role } from '../../shared/auth/roles.js';
 import { Fridge, House, Site, User, UserSite } from '../models/index.js';
+import { seedDemoReceiving } from './demo-receiving.js';
+import { seedDemoFridgeLogs } from './demo-fridge-logs.js';
+import { seedDemoFlocks } from './demo-flocks.js';
 
 export interface DemoAccount {
   email: string;
@@ -63,6 +66,9 @@ export async function seedDemoScenario(sequelize: Sequelize, hash: (password: st
         await UserSite.create({ userId: user.id, siteId: siteIds.get(code)! }, { transaction });
       }
     }
+    await seedDemoReceiving(transaction);
+    await seedDemoFlocks(transaction);
   });
+  await seedDemoFridgeLogs(sequelize);
   return true;
 }

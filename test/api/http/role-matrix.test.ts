@@ -6,6 +6,7 @@ import { accessMarker } from '../../../api/http/access.js';
 import { routeCatalog, type RouteEntry } from '../../../api/http/secure-router.js';
 import { resetDatabase } from '../../support/test-database.js';
 import { createSite, signInAs, testApp, type SignedIn } from '../../support/test-app.js';
+import { siteRecordPath } from '../../support/site-records.js';
 
 interface Layer {
   route?: { path: string; methods: Record<string, boolean>; stack: { handle: object }[] };
@@ -87,10 +88,10 @@ describe('role matrix (generated from the router)', () => {
         const allowed = route.access as { roles: readonly Role[] | 'signed-in' };
         const role: Role = allowed.roles === 'signed-in' ? 'crew' : allowed.roles[0];
         const { agent, csrf } = await signInAs([role], [mine]);
-        const response = await send(agent, route, concretePath(route, theirs.id), csrf);
+        const response = await send(agent, route, await siteRecordPath(route.path, theirs.id), csrf);
         expect(response.status).to.equal(404);
         if (route.method === 'get') {
-          const own = await agent.get(concretePath(route, mine.id));
+          const own = await agent.get(await siteRecordPath(route.path, mine.id));
           expect(own.status, 'the same user reads their own site').to.equal(200);
         }
       });

@@ -21,7 +21,14 @@ describe('sites', () => {
     const response = await agent.post('/api/sites').set('X-XSRF-TOKEN', csrf).send({ code: 'west', name: 'West farm', timeZone: 'America/Chicago' });
     expect(response.status).to.equal(201);
     expect(response.body).to.include({ code: 'WEST', timeZone: 'America/Chicago' });
-    expect(response.body.settings).to.deep.equal({ overagePercent: 0, storeWithinMinutes: 30, staleDataHours: 24 });
+    expect(response.body.settings).to.deep.equal({
+      overagePercent: 0,
+      storeWithinMinutes: 30,
+      staleDataHours: 24,
+      projectionHorizonDays: 180,
+      expiryAlertDays: [30, 60, 90],
+      reorderMarginDays: 3,
+    });
     expect(await AuditEntry.count({ where: { action: 'site.create' } })).to.equal(1);
   });
 

@@ -3,12 +3,16 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { MatChipsModule } from '@angular/material/chips';
 import { roleLabels } from '@shared/auth/roles.js';
 import { AuthStore } from '../../core/auth/auth-store';
+import { PurchasingCard } from './purchasing-card';
+import { PurchasingOutlookCard } from './purchasing-outlook-card';
+import { ReceivingCard } from './receiving-card';
 import { SitesCard } from './sites-card';
+import { StorageCard } from './storage-card';
 import { UsersCard } from './users-card';
 
 @Component({
   selector: 'vy-home',
-  imports: [MatChipsModule, SitesCard, UsersCard],
+  imports: [MatChipsModule, SitesCard, UsersCard, ReceivingCard, PurchasingCard, PurchasingOutlookCard, StorageCard],
   templateUrl: './home.html',
   styleUrl: './home.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

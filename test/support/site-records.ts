@@ -1,0 +1,55 @@
+// Records on a given site for the role matrix: a route naming a record by id is tried against a real record of that site.
+import { randomUUID } from 'node:crypto';
+import { Shipment, ShipmentPhoto, Site, User } from '../../database/models/index.js';
+import { PhotoStore } from '../../api/photos/photo-store.js';
+import { processPhoto } from '../../api/photos/process-photo.js';
+import { createCatalogue, createPurchaseOrder, makeJpeg } from './receiving-fixtures.js';
+import { testConfig } from './test-app.js';
+import { fridgeRecordMakers } from './fridge-records.js';
+import { flockRecordMakers } from './flock-records.js';
+
+type RecordMaker = (siteId: number) => Promise<number>;
+
+async function anyUserId(): Promise<number> {
+  const user = (await User.findOne()) ?? (await User.create({ email: `maker-${randomUUID().slice(0, 6)}@test.example`, name: 'Record maker', roles: ['admin'], passwordHash: 'x' }));
+  return user.id;
+}
+
+async function makeShipment(siteId: number): Promise<number> {
+  // A warm arrival, so the shipment has a discrepancy report to read.
+  const shipment = await Shipment.create({
+    siteId, purchaseOrderId: null, supplierId: null, clientKey: randomUUID(), arrivedAt: new Date(), shippedAt: null,
+    containerIntact: true, coolantPresent: true, indicator: 'none', contentsCold: false,
+    readingValue: null, readingUnit: null, readingPlace: null, outcome: 'accepted_with_discrepancies', receivedBy: await anyUserId(), reportMailedAt: null,
+  });
+  return shipment.id;
+}
+
+async function makePhoto(siteId: number): Promise<number> {
+  const shipmentId = await makeShipment(siteId);
+  const [stored] = await new PhotoStore(testConfig().UPLOADS_DIR).write([await processPhoto({ buffer: await makeJpeg(64, 48), originalname: 'box.jpg' }, 0)]);
+  const photo = await ShipmentPhoto.create({ shipmentId, fileKey: stored!.fileKey, width: stored!.width, height: stored!.height, bytes: stored!.display.length, uploadedBy: null });
+  return photo.id;
+}
+
+async function makePurchaseOrder(siteId: number): Promise<number> {
+  return (await createPurchaseOrder((await Site.findByPk(siteId))!, await createCatalogue())).id;
+}
+
+/** Route parameters that name a site-scoped record, each with a maker of such a record on a given site. */
+export const siteRecordMakers: Record<string, RecordMaker> = {
+  shipmentId: makeShipment,
+  photoId: makePhoto,
+  purchaseOrderId: makePurchaseOrder,
+  ...fridgeRecordMakers,
+  ...flockRecordMakers,
+};
+
+/** The route's path for a site: :siteId becomes the site, a known record parameter a record made on it, any other 1. */
+export async function siteRecordPath(path: string, siteId: number): Promise<string> {
+  let concrete = path.replace(':siteId', String(siteId));
+  for (const [param, make] of Object.entries(siteRecordMakers)) {
+    if (concrete.includes(`:${param}`)) concrete = concrete.replace(`:${param}`, String(await make(siteId)));
+  }
+  return concrete.replace(/:[A-Za-z]+/g, '1');
+}
