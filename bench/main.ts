@@ -1,4 +1,4 @@
-// `npm run bench`: a year of one-minute readings imported against psql's \copy, analysis throughput, the year chart query.
+// `npm run bench`: logger import against psql's \copy, analysis throughput, the year chart query, planning at 2,000 and 4,000 flocks, client size.
 import { spawnSync } from 'node:child_process';
 import { readFileSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -16,6 +16,10 @@ import { ensurePostgresBinaries } from '../database/scripts/postgres-binaries.js
 import { runtimeDir } from '../database/scripts/runtime-dir.js';
 import { ownerSequelize, startBenchDatabase } from './bench-cluster.js';
 import { writeYearOfReadings } from './year-of-readings.js';
+import { planningBench } from './planning-bench.js';
+import { clientSize } from './client-size.js';
+import { clientIndex, ensureClientBuilt } from '../database/scripts/client-build.js';
+import { dirname } from 'node:path';
 
 const log = (line: string) => process.stdout.write(`[bench] ${line}\n`);
 const YEAR_START = Date.UTC(2025, 0, 1);
@@ -107,8 +111,14 @@ async function main(): Promise<void> {
     const points = chart.result.primary.buckets.length * 2 + chart.result.primary.points.length;
     log(`year chart on a fridge with five years stored: ${round(chart.ms)} ms, ${points} points (${chart.result.bucketMinutes / 60} h buckets)`);
 
+    const planning = planningBench(log);
+    ensureClientBuilt(log);
+    const client = clientSize(dirname(clientIndex), log);
+
     const results = {
       at: new Date().toISOString(),
+      planning,
+      client,
       rows,
       fileMegabytes: round(size / 1024 / 1024, 2),
       psqlCopyMs: round(copyMs),
