@@ -6,6 +6,7 @@ import { projectSite } from '../../shared/demand/project-site.js';
 import type { SiteProjection } from '../../shared/demand/projection-types.js';
 import type { SiteProjectionView } from '../../shared/demand/projection-view.js';
 import { transferCandidates, type SpareLot } from '../../shared/demand/transfer-candidates.js';
+import { AppError } from '../http/app-error.js';
 import { listPurchaseOrders } from '../purchase-orders/purchase-orders-service.js';
 import { nextReference } from './next-reference.js';
 import { withSendings } from './order-sendings.js';
@@ -43,13 +44,23 @@ function settingsViews(siteId: number, { loaded, projection }: Projected): Produ
   });
 }
 
+/** The planner refuses vial sizes too close to coprime to plan exactly (e.g. 1,000 and 1,001 doses): say so, never a 500. */
+function planOrExplain(site: Site, loaded: LoadedProjection): SiteProjection {
+  try {
+    return projectSite(loaded.input);
+  } catch (error) {
+    if (error instanceof RangeError) throw AppError.unprocessable(`${site.name} cannot be planned exactly: ${error.message}. Check the packs' doses per vial in the catalogue.`);
+    throw error;
+  }
+}
+
 /** Projections of `wanted` sites; every site the user sees is planned, since each may lend to another. */
 export async function projectSites(user: Express.User, wanted: number[] | 'all', now = new Date()): Promise<SiteProjectionView[]> {
   const sites = await Site.findAll({ where: user.allSites ? {} : { id: { [Op.in]: user.siteIds } }, order: [['name', 'ASC']] });
   const projected = new Map<number, Projected>();
   for (const site of sites) {
     const loaded = await loadProjectionInput(site.id, now);
-    projected.set(site.id, { loaded, projection: projectSite(loaded.input) });
+    projected.set(site.id, { loaded, projection: planOrExplain(site, loaded) });
   }
   const spare = new Map(sites.map((site) => [site.id, spareLots(site, projected.get(site.id)!)]));
   const chosen = sites.filter((site) => wanted === 'all' || wanted.includes(site.id));
