@@ -13,6 +13,7 @@ import { AppError } from './http/app-error.js';
 import { csrfCookieOnReads } from './http/csrf.js';
 import { errorHandler } from './http/error-handler.js';
 import { createSecureRouter, type SecureRouter } from './http/secure-router.js';
+import { exposureRoutes } from './exposure/exposure.routes.js';
 import { outboxRoutes } from './outbox/outbox.routes.js';
 import { sitesRoutes } from './sites/sites.routes.js';
 import { usersRoutes } from './users/users.routes.js';
@@ -54,6 +55,7 @@ function featureRouters(context: AppContext): SecureRouter[] {
     programmesRoutes(context),
     vaccinationsRoutes(context),
     demandRoutes(context),
+    exposureRoutes(context),
   ];
 }
 

@@ -6,3 +6,4 @@ export { lotExposure } from './lot-exposure.js';
 export { staySegments } from './stay-segments.js';
 export { unionLengthMs, type Interval } from './interval-union.js';
 export { staysFromBalanceChanges, type BalanceChange } from './stays-from-balance-changes.js';
+export { movementHistory, type LedgerMovement, type MovementHistory } from './movement-history.js';

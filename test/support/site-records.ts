@@ -7,6 +7,7 @@ import { createCatalogue, createPurchaseOrder, makeJpeg } from './receiving-fixt
 import { testConfig } from './test-app.js';
 import { fridgeRecordMakers } from './fridge-records.js';
 import { flockRecordMakers } from './flock-records.js';
+import { createPresentation, createProduct, createSiteFridge, stockLot } from './flock-fixtures.js';
 
 type RecordMaker = (siteId: number) => Promise<number>;
 
@@ -36,11 +37,20 @@ async function makePurchaseOrder(siteId: number): Promise<number> {
   return (await createPurchaseOrder((await Site.findByPk(siteId))!, await createCatalogue())).id;
 }
 
+/** A lot received into a fridge of the site (its site for access is where it was first received). */
+async function makeReceivedLot(siteId: number): Promise<number> {
+  const site = (await Site.findByPk(siteId))!;
+  const product = await createProduct();
+  const presentation = await createPresentation(product, 1000);
+  return (await stockLot(await createSiteFridge(site), presentation, 10, '2030-01-31')).id;
+}
+
 /** Route parameters that name a site-scoped record, each with a maker of such a record on a given site. */
 export const siteRecordMakers: Record<string, RecordMaker> = {
   shipmentId: makeShipment,
   photoId: makePhoto,
   purchaseOrderId: makePurchaseOrder,
+  lotId: makeReceivedLot,
   ...fridgeRecordMakers,
   ...flockRecordMakers,
 };
