@@ -14,6 +14,7 @@ import { csrfCookieOnReads } from './http/csrf.js';
 import { errorHandler } from './http/error-handler.js';
 import { createSecureRouter, type SecureRouter } from './http/secure-router.js';
 import { exposureRoutes } from './exposure/exposure.routes.js';
+import { holdsRoutes } from './holds/holds.routes.js';
 import { outboxRoutes } from './outbox/outbox.routes.js';
 import { sitesRoutes } from './sites/sites.routes.js';
 import { usersRoutes } from './users/users.routes.js';
@@ -56,6 +57,7 @@ function featureRouters(context: AppContext): SecureRouter[] {
     vaccinationsRoutes(context),
     demandRoutes(context),
     exposureRoutes(context),
+    holdsRoutes(context),
   ];
 }
 

@@ -23,13 +23,24 @@ export async function openHold(hold: HoldInput, transaction: Transaction): Promi
 }
 
 /**
- * The holds still waiting for the veterinarian, by lot. Receiving records no decisions, so every hold is
- * undecided here; the lots feature narrows this to holds without a decision in their favour.
+ * The holds that keep each lot from use: every hold whose current decision (the one nobody superseded) is not
+ * a release. A discard decision keeps the hold here; the discard movement empties the lot anyway.
  */
 export async function undecidedHoldsByLot(lotIds: number[], transaction?: Transaction): Promise<Map<number, HoldView[]>> {
   const byLot = new Map<number, HoldView[]>();
   if (!lotIds.length) return byLot;
-  const holds = await Hold.findAll({ where: { lotId: [...new Set(lotIds)] }, order: [['openedAt', 'ASC'], ['id', 'ASC']], transaction });
+  const released = new Set(
+    (
+      await Hold.sequelize!.query<{ hold_id: number }>(
+        `SELECT d.hold_id FROM hold_decisions d JOIN holds h ON h.id = d.hold_id
+         WHERE h.lot_id IN (:lotIds) AND d.decision IN ('release', 'release_with_condition')
+           AND NOT EXISTS (SELECT 1 FROM hold_decisions later WHERE later.supersedes_id = d.id)`,
+        { replacements: { lotIds: [...new Set(lotIds)] }, type: QueryTypes.SELECT, transaction },
+      )
+    ).map((row) => row.hold_id),
+  );
+  const holds = (await Hold.findAll({ where: { lotId: [...new Set(lotIds)] }, order: [['openedAt', 'ASC'], ['id', 'ASC']], transaction }))
+    .filter((hold) => !released.has(hold.id));
   const openerIds = [...new Set(holds.map((h) => h.openedBy).filter((id): id is number => id !== null))];
   const openers = new Map((await User.findAll({ where: { id: openerIds }, attributes: ['id', 'name'], transaction })).map((u) => [u.id, u.name]));
   for (const hold of holds) {

@@ -9,11 +9,13 @@ import { UserSite } from './user-site.js';
 import { initReceivingModels } from './receiving-models.js';
 import { initFridgeLogModels } from './fridge-log-models.js';
 import { initFlockModels } from './flock-models.js';
+import { initLotReviewModels } from './lot-review-models.js';
 
 export { AuditEntry, Fridge, House, Site, User, UserSite };
 export * from './receiving-models.js';
 export * from './fridge-log-models.js';
 export * from './flock-models.js';
+export * from './lot-review-models.js';
 
 export function initModels(sequelize: Sequelize): void {
   for (const model of [Site, User, UserSite, AuditEntry, House, Fridge]) model.initModel(sequelize);
@@ -27,6 +29,7 @@ export function initModels(sequelize: Sequelize): void {
   initReceivingModels(sequelize);
   initFridgeLogModels(sequelize);
   initFlockModels(sequelize);
+  initLotReviewModels(sequelize);
 }
 
 /** Opens the application's connection pool (as the application role) with every model ready. */

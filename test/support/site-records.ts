@@ -1,6 +1,6 @@
 // Records on a given site for the role matrix: a route naming a record by id is tried against a real record of that site.
 import { randomUUID } from 'node:crypto';
-import { Shipment, ShipmentPhoto, Site, User } from '../../database/models/index.js';
+import { Hold, Shipment, ShipmentPhoto, Site, User } from '../../database/models/index.js';
 import { PhotoStore } from '../../api/photos/photo-store.js';
 import { processPhoto } from '../../api/photos/process-photo.js';
 import { createCatalogue, createPurchaseOrder, makeJpeg } from './receiving-fixtures.js';
@@ -45,12 +45,19 @@ async function makeReceivedLot(siteId: number): Promise<number> {
   return (await stockLot(await createSiteFridge(site), presentation, 10, '2030-01-31')).id;
 }
 
+/** An arrival hold on a lot received at the site. */
+async function makeHold(siteId: number): Promise<number> {
+  const lotId = await makeReceivedLot(siteId);
+  return (await Hold.create({ lotId, cause: 'arrival', sourceKind: 'test', sourceId: lotId, reason: 'test hold', openedBy: null })).id;
+}
+
 /** Route parameters that name a site-scoped record, each with a maker of such a record on a given site. */
 export const siteRecordMakers: Record<string, RecordMaker> = {
   shipmentId: makeShipment,
   photoId: makePhoto,
   purchaseOrderId: makePurchaseOrder,
   lotId: makeReceivedLot,
+  holdId: makeHold,
   ...fridgeRecordMakers,
   ...flockRecordMakers,
 };

@@ -1,0 +1,99 @@
+// The veterinarian's signed decisions: password re-entered, veterinarians only, never changed, superseded by a correction.
+import { expect } from 'chai';
+import { AuditEntry, Hold, HoldDecision, StockBalance, StockMovement } from '../../../database/models/index.js';
+import { undecidedHoldsByLot } from '../../../api/lots/holds.js';
+import { resetDatabase, testEnv } from '../../support/test-database.js';
+import { createSite, signInAs, testPassword } from '../../support/test-app.js';
+import { createPresentation, createProduct, createSiteFridge, stockLot } from '../../support/flock-fixtures.js';
+import { Sequelize } from 'sequelize';
+
+async function heldLot(vials = 10) {
+  const site = await createSite('VET');
+  const lot = await stockLot(await createSiteFridge(site), await createPresentation(await createProduct(), 1000), vials, '2030-01-31');
+  const first = await Hold.create({ lotId: lot.id, cause: 'arrival', sourceKind: 'test', sourceId: 1, reason: 'warm arrival', openedBy: null });
+  const second = await Hold.create({ lotId: lot.id, cause: 'excursion', sourceKind: 'test', sourceId: 2, reason: 'fridge excursion', openedBy: null });
+  return { site, lot, first, second };
+}
+
+describe('hold decisions', () => {
+  beforeEach(resetDatabase);
+
+  it('a lot with two holds stays held until both are released; the signature keeps name, time and meaning', async () => {
+    const { lot, first, second } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    const released = await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release', password: testPassword });
+    expect(released.status).to.equal(201);
+    expect(released.body).to.include({ decision: 'release', signerName: vet.user.name });
+    expect(released.body.signatureMeaning).to.match(/reviewed this lot's exposure/);
+    expect((await undecidedHoldsByLot([lot.id])).get(lot.id)?.map((h) => h.id)).to.deep.equal([second.id]);
+    await vet.agent.post(`/api/holds/${second.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf)
+      .send({ decision: 'release_with_condition', condition: 'Use first, within two weeks', password: testPassword }).expect(201);
+    expect((await undecidedHoldsByLot([lot.id])).get(lot.id)).to.equal(undefined);
+    expect(await AuditEntry.count({ where: { action: 'hold.decide' } })).to.equal(2);
+  });
+
+  it('refuses a wrong password (nothing signed), and any role but veterinarian (403)', async () => {
+    const { first } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    const wrong = await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release', password: 'not my password at all' });
+    expect(wrong.status).to.equal(400);
+    expect(wrong.body.error.fields[0].field).to.equal('password');
+    const storage = await signInAs(['storage', 'admin']);
+    const forbidden = await storage.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', storage.csrf).send({ decision: 'release', password: testPassword });
+    expect(forbidden.status).to.equal(403);
+    expect(await HoldDecision.count()).to.equal(0);
+  });
+
+  it('a release with condition needs the condition', async () => {
+    const { first } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    const response = await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release_with_condition', password: testPassword });
+    expect(response.status).to.equal(400);
+    expect(response.body.error.fields[0].field).to.equal('condition');
+  });
+
+  it('a correction must supersede the current decision; both are kept and the new one is current', async () => {
+    const { first } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    const original = await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release', password: testPassword });
+    const unlinked = await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'discard', password: testPassword });
+    expect(unlinked.status).to.equal(409);
+    expect(unlinked.body.error.fields[0].field).to.equal('supersedesId');
+    const correction = await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf)
+      .send({ decision: 'release_with_condition', condition: 'Use within 7 days', password: testPassword, supersedesId: original.body.id });
+    expect(correction.status).to.equal(201);
+    const list = await vet.agent.get(`/api/holds/${first.id}/decisions`).expect(200);
+    expect(list.body.items.map((d: { decision: string; current: boolean }) => [d.decision, d.current])).to.deep.equal([['release', false], ['release_with_condition', true]]);
+  });
+
+  it('signed decisions cannot be changed or removed by the application role (SQLSTATE 42501)', async () => {
+    const { first } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release', password: testPassword }).expect(201);
+    const asApp = new Sequelize(testEnv('DATABASE_URL'), { logging: false, pool: { max: 1 } });
+    try {
+      const codes: (string | undefined)[] = [];
+      for (const sql of [`UPDATE hold_decisions SET decision = 'discard'`, 'DELETE FROM hold_decisions']) {
+        try {
+          await asApp.query(sql);
+          codes.push(undefined);
+        } catch (error) {
+          codes.push((error as { parent?: { code?: string } }).parent?.code);
+        }
+      }
+      expect(codes).to.deep.equal(['42501', '42501']);
+    } finally {
+      await asApp.close();
+    }
+  });
+
+  it('a discard decision posts the discard movement for every vial left, in the same transaction', async () => {
+    const { lot, first } = await heldLot(12);
+    const vet = await signInAs(['veterinarian']);
+    await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'discard', password: testPassword }).expect(201);
+    const discard = await StockMovement.findOne({ where: { lotId: lot.id, kind: 'discard' } });
+    expect(discard?.vials).to.equal(12);
+    expect(discard?.reason).to.equal('decided by the veterinarian');
+    expect((await StockBalance.findAll({ where: { lotId: lot.id } })).map((b) => b.vials)).to.deep.equal([0]);
+  });
+});
