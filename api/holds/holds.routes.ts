@@ -5,10 +5,16 @@ import { createSecureRouter } from '../http/secure-router.js';
 import { parseIdParam } from '../http/params.js';
 import { parseInput } from '../http/validate.js';
 import { decideHold, holdDecisions, holdSiteId } from './hold-decisions-service.js';
+import { reviewQueue } from './review-queue.js';
 
 export function holdsRoutes(context: AppContext) {
   const router = createSecureRouter('/api/holds');
   const siteOf = (req: { params: Record<string, string | string[]> }) => holdSiteId(parseIdParam(req.params.holdId));
+
+  // Storage staff fill the troubleshooting side of these events; the veterinarian decides them.
+  router.get('/queue', { roles: ['veterinarian', 'storage', 'admin'] }, async (req, res) => {
+    res.json({ items: await reviewQueue(context.sequelize, req.user!) });
+  });
 
   router.get('/:holdId/decisions', { roles: 'signed-in', siteOf }, async (req, res) => {
     res.json({ items: await holdDecisions(parseIdParam(req.params.holdId)) });

@@ -105,6 +105,12 @@ export const routes: Routes = [
         title: 'Purchasing · Vialyard',
         loadComponent: () => import('./pages/purchasing'),
       },
+      {
+        path: 'review',
+        canActivate: [roleGuard('veterinarian', 'storage', 'admin')],
+        title: 'Review · Vialyard',
+        loadComponent: () => import('./pages/review'),
+      },
       { path: 'account', title: 'My account · Vialyard', loadComponent: () => import('./pages/account') },
       { path: '**', title: 'Not found · Vialyard', loadComponent: () => import('./pages/not-found') },
     ],

@@ -97,3 +97,25 @@ describe('hold decisions', () => {
     expect((await StockBalance.findAll({ where: { lotId: lot.id } })).map((b) => b.vials)).to.deep.equal([0]);
   });
 });
+
+describe('the review queue', () => {
+  beforeEach(resetDatabase);
+
+  it('groups undecided holds by the event behind them, with vials and doses at risk, and drops decided ones', async () => {
+    const { lot, first, second } = await heldLot(4);
+    const vet = await signInAs(['veterinarian']);
+    const before = await vet.agent.get('/api/holds/queue').expect(200);
+    expect(before.body.items.map((e: { cause: string }) => e.cause)).to.deep.equal(['arrival', 'excursion']);
+    expect(before.body.items[0].lots[0]).to.include({ lotId: lot.id, vials: 4, doses: 4000 });
+    await vet.agent.post(`/api/holds/${first.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release', password: testPassword }).expect(201);
+    const after = await vet.agent.get('/api/holds/queue').expect(200);
+    expect(after.body.items.map((e: { lots: { holdId: number }[] }) => e.lots[0].holdId)).to.deep.equal([second.id]);
+  });
+
+  it('shows a user limited to another site none of this site\'s holds', async () => {
+    await heldLot();
+    const elsewhere = await createSite('ELSE');
+    const vet = await signInAs(['veterinarian'], [elsewhere]);
+    expect((await vet.agent.get('/api/holds/queue').expect(200)).body.items).to.deep.equal([]);
+  });
+});

@@ -1,0 +1,1 @@
+export { Review as default } from './review';
