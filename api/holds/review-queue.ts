@@ -1,29 +1,6 @@
 // The veterinarian's queue: every hold with no decision yet, grouped by the event behind it (an arrival, an excursion...).
 import { QueryTypes, type Sequelize } from 'sequelize';
-
-export interface QueueLot {
-  holdId: number;
-  lotId: number;
-  lotNumber: string;
-  expiry: string;
-  product: string;
-  dosesPerVial: number;
-  vials: number;
-  doses: number;
-  siteId: number;
-  reason: string;
-  openedAt: string;
-}
-
-export interface QueueEvent {
-  cause: string;
-  sourceKind: string;
-  sourceId: number | null;
-  openedAt: string;
-  lots: QueueLot[];
-  vials: number;
-  doses: number;
-}
+import type { QueueEvent } from '../../shared/lots/review-queue.js';
 
 interface Row {
   hold_id: number;

@@ -3,30 +3,10 @@ import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { map, type Observable } from 'rxjs';
 import type { HoldDecisionKind } from '@shared/lots/lot-status.js';
+import type { QueueEvent } from '@shared/lots/review-queue.js';
+
+export type { QueueEvent, QueueLot } from '@shared/lots/review-queue.js';
 import { handlesOwnErrors } from '../../core/http/error-interceptor';
-
-export interface QueueLot {
-  holdId: number;
-  lotId: number;
-  lotNumber: string;
-  expiry: string;
-  product: string;
-  dosesPerVial: number;
-  vials: number;
-  doses: number;
-  reason: string;
-  openedAt: string;
-}
-
-export interface QueueEvent {
-  cause: string;
-  sourceKind: string;
-  sourceId: number | null;
-  openedAt: string;
-  lots: QueueLot[];
-  vials: number;
-  doses: number;
-}
 
 export interface DecisionRequest {
   decision: HoldDecisionKind;
