@@ -6,6 +6,8 @@ import { parseIdParam } from '../http/params.js';
 import { parseInput } from '../http/validate.js';
 import { decideHold, holdDecisions, holdSiteId } from './hold-decisions-service.js';
 import { reviewQueue } from './review-queue.js';
+import { doNotUseTag } from './do-not-use-tag.js';
+import { lotSiteId } from '../exposure/lot-exposure-service.js';
 
 export function holdsRoutes(context: AppContext) {
   const router = createSecureRouter('/api/holds');
@@ -14,6 +16,11 @@ export function holdsRoutes(context: AppContext) {
   // Storage staff fill the troubleshooting side of these events; the veterinarian decides them.
   router.get('/queue', { roles: ['veterinarian', 'storage', 'admin'] }, async (req, res) => {
     res.json({ items: await reviewQueue(context.sequelize, req.user!) });
+  });
+
+  router.get('/lots/:lotId/tag', { roles: 'signed-in', siteOf: (req) => lotSiteId(parseIdParam(req.params.lotId)) }, async (req, res) => {
+    const tag = await doNotUseTag(parseIdParam(req.params.lotId));
+    res.type('application/pdf').attachment(tag.fileName).send(tag.pdf);
   });
 
   router.get('/:holdId/decisions', { roles: 'signed-in', siteOf }, async (req, res) => {

@@ -37,12 +37,15 @@ async function makePurchaseOrder(siteId: number): Promise<number> {
   return (await createPurchaseOrder((await Site.findByPk(siteId))!, await createCatalogue())).id;
 }
 
-/** A lot received into a fridge of the site (its site for access is where it was first received). */
+/** A held lot received into a fridge of the site (its site for access is where it was first received). */
 async function makeReceivedLot(siteId: number): Promise<number> {
   const site = (await Site.findByPk(siteId))!;
   const product = await createProduct();
   const presentation = await createPresentation(product, 1000);
-  return (await stockLot(await createSiteFridge(site), presentation, 10, '2030-01-31')).id;
+  const lot = await stockLot(await createSiteFridge(site), presentation, 10, '2030-01-31');
+  // Held, so routes about held lots (the do-not-use tag) have something to show for their own site.
+  await Hold.create({ lotId: lot.id, cause: 'arrival', sourceKind: 'test-lot', sourceId: lot.id, reason: 'test hold', openedBy: null });
+  return lot.id;
 }
 
 /** An arrival hold on a lot received at the site. */

@@ -6,6 +6,7 @@ import { resetDatabase, testEnv } from '../../support/test-database.js';
 import { createSite, signInAs, testPassword } from '../../support/test-app.js';
 import { createPresentation, createProduct, createSiteFridge, stockLot } from '../../support/flock-fixtures.js';
 import { Sequelize } from 'sequelize';
+import { firstPagePng, inkShare, pdfText } from '../../support/pdf-pages.js';
 
 async function heldLot(vials = 10) {
   const site = await createSite('VET');
@@ -117,5 +118,40 @@ describe('the review queue', () => {
     const elsewhere = await createSite('ELSE');
     const vet = await signInAs(['veterinarian'], [elsewhere]);
     expect((await vet.agent.get('/api/holds/queue').expect(200)).body.items).to.deep.equal([]);
+  });
+});
+
+describe('the do-not-use tag', () => {
+  beforeEach(resetDatabase);
+
+  it('prints the lot, product, causes, since when and the veterinarian to ask, on a page that is not blank', async () => {
+    const { lot } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    await vet.user.update({ name: 'Dr. Tag Reader' });
+    const storage = await signInAs(['storage']);
+    const response = await storage.agent.get(`/api/holds/lots/${lot.id}/tag`).buffer(true).parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    expect(response.status).to.equal(200);
+    expect(response.headers['content-type']).to.match(/application\/pdf/);
+    const text = pdfText(response.body as Buffer);
+    expect(text).to.match(/DO NOT USE/);
+    expect(text).to.contain(`Lot ${lot.lotNumber}`);
+    expect(text).to.match(/arrived outside its range: warm arrival/);
+    expect(text).to.match(/fridge excursion: fridge excursion/);
+    expect(text).to.contain('Dr. Tag Reader');
+    expect(text).to.match(/Do not discard them unless the veterinarian directs it/);
+    expect(await inkShare(firstPagePng(response.body as Buffer))).to.be.greaterThan(0.01);
+  });
+
+  it('is refused for a lot with every hold released (409)', async () => {
+    const { lot, first, second } = await heldLot();
+    const vet = await signInAs(['veterinarian']);
+    for (const hold of [first, second]) {
+      await vet.agent.post(`/api/holds/${hold.id}/decisions`).set('X-XSRF-TOKEN', vet.csrf).send({ decision: 'release', password: testPassword }).expect(201);
+    }
+    expect((await vet.agent.get(`/api/holds/lots/${lot.id}/tag`)).status).to.equal(409);
   });
 });
