@@ -35,6 +35,8 @@ describe('the veterinarian\'s review in Chromium', () => {
     await page.getByLabel('E-mail').fill('vet@test.example');
     await page.getByLabel('Password', { exact: true }).fill(testPassword);
     await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Waiting for your decision' }).waitFor();
+    await page.getByText('1 held lot from 1 event, 3 vials in all.').waitFor();
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Review' }).click();
     await page.getByRole('heading', { name: 'Arrived outside its range' }).waitFor();
     expect(await page.getByRole('cell', { name: 'RV2201', exact: true }).count()).to.equal(1);

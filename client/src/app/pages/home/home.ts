@@ -9,10 +9,11 @@ import { ReceivingCard } from './receiving-card';
 import { SitesCard } from './sites-card';
 import { StorageCard } from './storage-card';
 import { UsersCard } from './users-card';
+import { ReviewCard } from './review-card';
 
 @Component({
   selector: 'vy-home',
-  imports: [MatChipsModule, SitesCard, UsersCard, ReceivingCard, PurchasingCard, PurchasingOutlookCard, StorageCard],
+  imports: [MatChipsModule, SitesCard, UsersCard, ReceivingCard, PurchasingCard, PurchasingOutlookCard, StorageCard, ReviewCard],
   templateUrl: './home.html',
   styleUrl: './home.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,6 +29,8 @@ export class Home {
   protected readonly greeting = computed(() => {
     const hour = new Date().getHours();
     const part = hour < 12 ? 'Good morning' : hour < 18 ? 'Good afternoon' : 'Good evening';
-    return `${part}, ${this.user()?.name.split(' ')[0] ?? ''}`;
+    // "Dr. Imani Castell" is greeted as Imani: a title ending in a full stop is not a first name.
+    const first = (this.user()?.name ?? '').split(/\s+/).find((word) => word && !word.endsWith('.')) ?? '';
+    return `${part}, ${first}`;
   });
 }
