@@ -2,29 +2,15 @@
 import { expect } from 'chai';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Browser } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
-import { launchBrowser } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createTestUser, testPassword } from '../support/test-app.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 describe('Content-Security-Policy in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-
-  before(async function () {
-    this.timeout(60_000);
-    await resetDatabase();
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  const suite = browserSuite();
 
   it('the built index.html has no inline script', () => {
-    const html = readFileSync(join(server.context.config.CLIENT_DIST_DIR, 'index.html'), 'utf8');
+    const html = readFileSync(join(suite.server.context.config.CLIENT_DIST_DIR, 'index.html'), 'utf8');
     const inline = [...html.matchAll(/<script(?![^>]*\bsrc=)[^>]*>/g)];
     expect(inline, 'inline <script> tags').to.have.length(0);
     expect(html).to.not.match(/\son[a-z]+=/i);
@@ -34,7 +20,7 @@ describe('Content-Security-Policy in Chromium', () => {
 
   it('signing in and opening every admin page reports no CSP violation', async () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
-    const context = await browser.newContext();
+    const context = await suite.browser.newContext();
     const page = await context.newPage();
     const violations: string[] = [];
     page.on('console', (message) => {
@@ -43,7 +29,7 @@ describe('Content-Security-Policy in Chromium', () => {
     await page.addInitScript(() => {
       document.addEventListener('securitypolicyviolation', (event) => console.error(`Refused to load: CSP ${event.violatedDirective} ${event.blockedURI}`));
     });
-    await page.goto(`${server.url}/`);
+    await page.goto(`${suite.server.url}/`);
     await page.getByLabel('E-mail').fill('admin@test.example');
     await page.getByLabel('Password', { exact: true }).fill(testPassword);
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -61,14 +47,14 @@ describe('Content-Security-Policy in Chromium', () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     const victim = await createTestUser({ email: 'odd@test.example', roles: ['crew'] });
     await victim.update({ name: hostile });
-    const context = await browser.newContext();
+    const context = await suite.browser.newContext();
     const page = await context.newPage();
     let dialogs = 0;
     page.on('dialog', (dialog) => {
       dialogs++;
       void dialog.dismiss();
     });
-    await page.goto(`${server.url}/`);
+    await page.goto(`${suite.server.url}/`);
     await page.getByLabel('E-mail').fill('admin@test.example');
     await page.getByLabel('Password', { exact: true }).fill(testPassword);
     await page.getByRole('button', { name: 'Sign in' }).click();

@@ -1,15 +1,15 @@
 // In Chromium: purchasing sees a shortfall, creates and sends the order, and receiving sees it expected; the flock pages and a
 // veterinarian's withdrawal override. axe runs on every page and dialog.
 import { expect } from 'chai';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
+import type { BrowserContext, Page } from 'playwright-core';
 import { ProductStockSetting } from '../../database/models/index.js';
-import { describeViolations, launchBrowser, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { caughtMail, clearCaughtMail } from '../support/mail-catcher.js';
 import { pdfText } from '../support/pdf-pages.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createFlock, createHouse, createPresentation, createProduct, createProgramme, createSupplier, createVaccination, siteDay } from '../support/flock-fixtures.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 async function expectAccessible(page: Page, what: string): Promise<void> {
   const violations = await seriousAccessibilityViolations(page);
@@ -26,25 +26,13 @@ async function signIn(page: Page, baseUrl: string, email: string): Promise<void>
 }
 
 describe('flocks and demand in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
+  const suite = browserSuite();
   let context: BrowserContext;
-
-  before(async function () {
-    this.timeout(90_000);
-    await resetDatabase();
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
   // axe-core is injected as a script, which the CSP would block; the CSP itself is tested on its own.
   beforeEach(async () => {
     await resetDatabase();
     clearCaughtMail();
-    context = await browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
+    context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
   });
   afterEach(() => context.close());
 
@@ -61,7 +49,7 @@ describe('flocks and demand in Chromium', () => {
     await createTestUser({ email: 'clerk@test.example', roles: ['receiving'], sites: [site] });
 
     const page = await context.newPage();
-    await signIn(page, server.url, 'buyer@test.example');
+    await signIn(page, suite.server.url, 'buyer@test.example');
     const outlook = page.locator('vy-purchasing-outlook-card');
     await outlook.getByText('20,000 doses missing').waitFor();
     await expectAccessible(page, 'purchasing home');
@@ -94,11 +82,11 @@ describe('flocks and demand in Chromium', () => {
     expect(mail.map((m) => m.subject)).to.deep.equal([`Purchase order ${reference} from ${site.name}`]);
     expect(pdfText(mail[0]!.attachments[0]!.content)).to.contain('Please deliver before noon.');
 
-    const clerk = await browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const clerk = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     try {
       const phone = await clerk.newPage();
-      await signIn(phone, server.url, 'clerk@test.example');
-      await phone.goto(`${server.url}/receiving`);
+      await signIn(phone, suite.server.url, 'clerk@test.example');
+      await phone.goto(`${suite.server.url}/receiving`);
       await phone.getByRole('heading', { name: 'Coming this week' }).waitFor();
       expect(await phone.getByRole('main').innerText()).to.contain(`order ${reference}`);
       await expectAccessible(phone, 'receiving page with the order expected');
@@ -119,7 +107,7 @@ describe('flocks and demand in Chromium', () => {
     await createTestUser({ email: 'vet@test.example', roles: ['veterinarian'] });
 
     const page = await context.newPage();
-    await signIn(page, server.url, 'vet@test.example');
+    await signIn(page, suite.server.url, 'vet@test.example');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Flocks' }).click();
     await page.getByRole('table', { name: 'Flocks' }).getByRole('link', { name: 'H1-25B' }).waitFor();
     await expectAccessible(page, 'flocks page');

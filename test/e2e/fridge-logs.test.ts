@@ -1,11 +1,11 @@
 // In Chromium: storage staff import a logger file, map its columns on the preview, see the chart and the excursion, record a check.
 import { expect } from 'chai';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
-import { describeViolations, launchBrowser, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import type { BrowserContext, Page } from 'playwright-core';
+import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createFridge, createLogger } from '../support/fridge-fixtures.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 async function expectAccessible(page: Page, what: string): Promise<void> {
   const violations = await seriousAccessibilityViolations(page);
@@ -34,23 +34,11 @@ function unhelpfulFile(): string {
 }
 
 describe('fridge logs in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
+  const suite = browserSuite();
   let context: BrowserContext;
-
-  before(async function () {
-    this.timeout(90_000);
-    await resetDatabase();
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
   beforeEach(async () => {
     await resetDatabase();
-    context = await browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
+    context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
   });
   afterEach(() => context.close());
 
@@ -61,7 +49,7 @@ describe('fridge logs in Chromium', () => {
     await createLogger(fridge, 'primary', 'LK1-0417');
     await createTestUser({ email: 'storage@test.example', roles: ['storage'] });
     const page = await context.newPage();
-    await signIn(page, server.url, 'storage@test.example');
+    await signIn(page, suite.server.url, 'storage@test.example');
     await page.getByText('Not checked today').waitFor();
     await expectAccessible(page, 'home with the storage card');
 
@@ -122,8 +110,8 @@ describe('fridge logs in Chromium', () => {
     const fridge = await createFridge(await createSite('LKN'), { code: 'LKN-F2' });
     await createTestUser({ email: 'storage@test.example', roles: ['storage'] });
     const page = await context.newPage();
-    await signIn(page, server.url, 'storage@test.example');
-    await page.goto(`${server.url}/daily-check?fridge=${fridge.id}`);
+    await signIn(page, suite.server.url, 'storage@test.example');
+    await page.goto(`${suite.server.url}/daily-check?fridge=${fridge.id}`);
     await page.getByRole('heading', { name: 'Daily check' }).waitFor();
     await page.getByText(/LKN-F2 · Fridge/).waitFor();
     await page.getByLabel('Current').fill('41');

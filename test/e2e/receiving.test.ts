@@ -1,14 +1,14 @@
 // In Chromium on a phone-sized screen: a clerk receives a shipment with a scanned lot and a photo, and sees it listed; axe on every page.
 import { expect } from 'chai';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
+import type { BrowserContext, Page } from 'playwright-core';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
 import { Hold, Lot } from '../../database/models/index.js';
-import { describeViolations, launchBrowser, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createCatalogue, createFridge, createPurchaseOrder, makeJpeg } from '../support/receiving-fixtures.js';
 import { clearPhotoFiles } from '../support/receiving-state.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 async function expectAccessible(page: Page, what: string): Promise<void> {
   const violations = await seriousAccessibilityViolations(page);
@@ -29,24 +29,12 @@ function scanData(gtin: string, expiry: string, lot: string): string {
 }
 
 describe('receiving in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
+  const suite = browserSuite();
   let context: BrowserContext;
-
-  before(async function () {
-    this.timeout(90_000);
-    await resetDatabase();
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
   beforeEach(async () => {
     await resetDatabase();
     clearPhotoFiles();
-    context = await browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
   });
   afterEach(() => context.close());
 
@@ -62,7 +50,7 @@ describe('receiving in Chromium', () => {
   it('a clerk on a phone receives the expected shipment with a scanned lot and a photo, and sees it listed', async () => {
     const { order } = await scene();
     const page = await context.newPage();
-    await signInThroughPage(page, server.url, 'clerk@test.example');
+    await signInThroughPage(page, suite.server.url, 'clerk@test.example');
     await page.getByRole('link', { name: 'Open receiving' }).click();
     await page.getByRole('heading', { name: 'Due today and overdue' }).waitFor();
     await page.getByText(`Order ${order.reference}`).waitFor();
@@ -110,8 +98,8 @@ describe('receiving in Chromium', () => {
   it('the draft survives a reload, photo included, and a warm reading shows the hold before sending', async () => {
     const { site, order } = await scene();
     const page = await context.newPage();
-    await signInThroughPage(page, server.url, 'clerk@test.example');
-    await page.goto(`${server.url}/receiving/new?site=${site.id}&order=${order.id}`);
+    await signInThroughPage(page, suite.server.url, 'clerk@test.example');
+    await page.goto(`${suite.server.url}/receiving/new?site=${site.id}&order=${order.id}`);
     await page.getByRole('button', { name: 'All checks fine' }).click();
     await page.keyboard.type('52');
     await page.getByRole('button', { name: 'Product surface' }).or(page.getByRole('radio', { name: 'Product surface' })).first().click();
@@ -145,8 +133,8 @@ describe('receiving in Chromium', () => {
   it('an unknown barcode is proposed in a dialog and used on the line at once; the camera dialog says when there is no camera', async () => {
     const { site } = await scene();
     const page = await context.newPage();
-    await signInThroughPage(page, server.url, 'clerk@test.example');
-    await page.goto(`${server.url}/receiving/new?site=${site.id}`);
+    await signInThroughPage(page, suite.server.url, 'clerk@test.example');
+    await page.goto(`${suite.server.url}/receiving/new?site=${site.id}`);
     await page.getByRole('button', { name: 'Camera' }).click();
     const camera = page.getByRole('dialog');
     await camera.getByText(/No camera is available here|Hold the carton/).waitFor();
@@ -170,10 +158,10 @@ describe('receiving in Chromium', () => {
   it('purchasing reads the catalogue, sees the proposal to confirm, and enters an order', async () => {
     const { catalogue } = await scene();
     await createTestUser({ email: 'buyer@test.example', roles: ['purchasing'] });
-    const desk = await browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
+    const desk = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
     try {
       const page = await desk.newPage();
-      await signInThroughPage(page, server.url, 'buyer@test.example');
+      await signInThroughPage(page, suite.server.url, 'buyer@test.example');
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Catalogue' }).click();
       await page.getByRole('heading', { name: catalogue.product.name }).waitFor();
       await expectAccessible(page, 'catalogue');

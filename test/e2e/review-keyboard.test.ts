@@ -1,12 +1,11 @@
 // Keyboard alone, in Chromium: a veterinarian reaches the review, opens a held lot and signs a release.
 import { expect } from 'chai';
-import type { Browser, Page } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
+import type { Page } from 'playwright-core';
 import { Hold, HoldDecision } from '../../database/models/index.js';
-import { launchBrowser } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createPresentation, createProduct, createSiteFridge, stockLot } from '../support/flock-fixtures.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 /** Presses Tab until the focused element's text matches (icon ligatures such as "fact_check" are part of it), so the walk never clicks. */
 async function tabTo(page: Page, pattern: RegExp, limit = 40): Promise<void> {
@@ -26,18 +25,7 @@ async function tabTo(page: Page, pattern: RegExp, limit = 40): Promise<void> {
 }
 
 describe('the review by keyboard in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-
-  before(async function () {
-    this.timeout(60_000);
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  const suite = browserSuite();
   beforeEach(resetDatabase);
 
   it('signs a release without the mouse', async () => {
@@ -45,9 +33,9 @@ describe('the review by keyboard in Chromium', () => {
     const lot = await stockLot(await createSiteFridge(site), await createPresentation(await createProduct(), 1000), 2, '2030-06-30', { lotNumber: 'KB1001' });
     const hold = await Hold.create({ lotId: lot.id, cause: 'arrival', sourceKind: 'shipment', sourceId: 1, reason: 'warm box', openedBy: null });
     await createTestUser({ email: 'vet@test.example', roles: ['veterinarian'] });
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await suite.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${suite.server.url}/sign-in`);
     await page.getByLabel('E-mail').waitFor();
     await page.keyboard.press('Tab');
     await page.keyboard.type('vet@test.example');

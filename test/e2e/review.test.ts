@@ -1,26 +1,14 @@
 // In Chromium: a veterinarian opens the review queue, reads the held lot, and signs a decision with their password.
 import { expect } from 'chai';
-import type { Browser } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
 import { HoldDecision, Hold } from '../../database/models/index.js';
-import { describeViolations, launchBrowser, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createPresentation, createProduct, createSiteFridge, stockLot } from '../support/flock-fixtures.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 describe('the veterinarian\'s review in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
-
-  before(async function () {
-    this.timeout(60_000);
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
+  const suite = browserSuite();
   beforeEach(resetDatabase);
 
   it('opens the queue, sees the held lot, refuses a wrong password, then signs a release with condition', async () => {
@@ -29,9 +17,9 @@ describe('the veterinarian\'s review in Chromium', () => {
     const hold = await Hold.create({ lotId: lot.id, cause: 'arrival', sourceKind: 'shipment', sourceId: 1, reason: 'arrived at 52 °F', openedBy: null });
     await createTestUser({ email: 'vet@test.example', roles: ['veterinarian'] });
 
-    const context = await browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
+    const context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
-    await page.goto(`${server.url}/`);
+    await page.goto(`${suite.server.url}/`);
     await page.getByLabel('E-mail').fill('vet@test.example');
     await page.getByLabel('Password', { exact: true }).fill(testPassword);
     await page.getByRole('button', { name: 'Sign in' }).click();

@@ -1,10 +1,10 @@
 // In Chromium: sign in through the real page, see the shell, use the users page and the account page; axe on every page.
 import { expect } from 'chai';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { startServer, type RunningServer } from '../../api/server.js';
-import { describeViolations, launchBrowser, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import type { BrowserContext, Page } from 'playwright-core';
+import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testConfig, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser, testPassword } from '../support/test-app.js';
+import { browserSuite } from '../support/browser-suite.js';
 
 async function expectAccessible(page: Page, what: string): Promise<void> {
   const violations = await seriousAccessibilityViolations(page);
@@ -20,24 +20,12 @@ async function signInThroughPage(page: Page, baseUrl: string, email: string): Pr
 }
 
 describe('the client shell in Chromium', () => {
-  let server: RunningServer;
-  let browser: Browser;
+  const suite = browserSuite();
   let context: BrowserContext;
-
-  before(async function () {
-    this.timeout(90_000);
-    await resetDatabase();
-    server = await startServer(testConfig({ VIALYARD_PORT: '0' }));
-    browser = await launchBrowser();
-  });
-  after(async () => {
-    await browser?.close();
-    await server?.close();
-  });
   // axe-core is injected as a script, which the CSP would block; the CSP itself is tested on its own.
   beforeEach(async () => {
     await resetDatabase();
-    context = await browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 800 } });
+    context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 800 } });
   });
   afterEach(() => context.close());
 
@@ -46,7 +34,7 @@ describe('the client shell in Chromium', () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     await createTestUser({ email: 'crew@test.example', roles: ['crew'], sites: [site] });
     const page = await context.newPage();
-    await page.goto(`${server.url}/`);
+    await page.goto(`${suite.server.url}/`);
     await page.waitForURL(/\/sign-in/);
     await expectAccessible(page, 'sign-in page');
 
@@ -68,7 +56,7 @@ describe('the client shell in Chromium', () => {
   it('an admin creates a user in the dialog, sees a field error first, then the user in the table', async () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     const page = await context.newPage();
-    await signInThroughPage(page, server.url, 'admin@test.example');
+    await signInThroughPage(page, suite.server.url, 'admin@test.example');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Users' }).click();
     await page.getByRole('table', { name: 'Users' }).waitFor();
     await expectAccessible(page, 'users page');
@@ -96,10 +84,10 @@ describe('the client shell in Chromium', () => {
 
   it('a crew member on a phone-sized screen opens the drawer, reaches My account and switches to °C', async () => {
     await createTestUser({ email: 'crew@test.example', roles: ['crew'] });
-    const phone = await browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const phone = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const page = await phone.newPage();
     try {
-      await page.goto(`${server.url}/`);
+      await page.goto(`${suite.server.url}/`);
       await page.getByLabel('E-mail').fill('crew@test.example');
       await page.getByLabel('Password', { exact: true }).fill(testPassword);
       await page.getByRole('button', { name: 'Sign in' }).click();
@@ -120,15 +108,15 @@ describe('the client shell in Chromium', () => {
   it('an unknown address inside the app shows the not-found page', async () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     const page = await context.newPage();
-    await signInThroughPage(page, server.url, 'admin@test.example');
-    await page.goto(`${server.url}/no/such/page`);
+    await signInThroughPage(page, suite.server.url, 'admin@test.example');
+    await page.goto(`${suite.server.url}/no/such/page`);
     await page.getByRole('heading', { name: 'Page not found' }).waitFor();
     await expectAccessible(page, 'not-found page');
   });
   it('signs in and reaches the users page with the keyboard alone', async () => {
     await createTestUser({ email: 'admin@test.example', roles: ['admin'] });
     const page = await context.newPage();
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${suite.server.url}/sign-in`);
     await page.getByLabel('E-mail').waitFor();
     await page.keyboard.press('Tab');
     await page.keyboard.type('admin@test.example');
