@@ -58,6 +58,14 @@ async function main(): Promise<number> {
       NG_CLI_ANALYTICS: 'false',
     };
     const failures: string[] = [];
+    // A contributor's quick loop: only the named test files (comma-separated globs), database hooks on.
+    const onlyFiles = process.env.VIALYARD_TEST_FILES?.split(',').filter(Boolean);
+    if (onlyFiles?.length) {
+      if (onlyFiles.some((file) => file.includes('e2e'))) ensureClientBuilt(log);
+      if (runMocha('the named files', [...withDatabase, '--timeout', '60000', ...onlyFiles], env)) failures.push('named files');
+      log(failures.length ? `FAILED: ${failures.join(', ')}` : 'The named files passed.');
+      return failures.length ? 1 : 0;
+    }
     if (wanted.has('types')) {
       log('Type-checking api, shared, database and test...');
       const tsc = spawnSync(join(projectRoot, 'node_modules', '.bin', 'tsc'), ['-p', 'tsconfig.api.json', '--noEmit'], { cwd: projectRoot, stdio: 'inherit' });

@@ -34,6 +34,7 @@ export function toProductView(product: Product, proposers: ReadonlyMap<number, s
     storageUnit: product.storageUnit,
     freezeSensitive: product.freezeSensitive,
     useWithinMinutes: product.useWithinMinutes,
+    timeOutLimitMinutes: product.timeOutLimitMinutes,
     withdrawalDays: product.withdrawalDays,
     notes: product.notes,
     status: product.status,

@@ -23,6 +23,7 @@ export class Product extends Model<InferAttributes<Product>, InferCreationAttrib
   declare storageUnit: 'F' | 'C';
   declare freezeSensitive: CreationOptional<boolean>;
   declare useWithinMinutes: number | null;
+  declare timeOutLimitMinutes: CreationOptional<number | null>;
   declare withdrawalDays: CreationOptional<number>;
   declare notes: CreationOptional<string>;
   declare status: CreationOptional<'confirmed' | 'proposed'>;
@@ -44,6 +45,7 @@ export class Product extends Model<InferAttributes<Product>, InferCreationAttrib
         storageUnit: { type: DataTypes.CHAR(1), allowNull: false },
         freezeSensitive: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         useWithinMinutes: { type: DataTypes.INTEGER, allowNull: true },
+        timeOutLimitMinutes: { type: DataTypes.INTEGER, allowNull: true },
         withdrawalDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 21 },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'confirmed' },

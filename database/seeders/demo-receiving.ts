@@ -42,6 +42,7 @@ export async function seedDemoReceiving(transaction: Transaction): Promise<void>
     const row = await Product.create(
       {
         name: product.name, maker: product.maker, kind: product.kind, route: product.route, useWithinMinutes: product.useWithinMinutes,
+        timeOutLimitMinutes: product.kind === 'live' ? 30 : 60,
         storageLow: 'celsius' in product ? 2 : 35, storageHigh: 'celsius' in product ? 8 : 45, storageUnit: 'celsius' in product ? 'C' : 'F',
         freezeSensitive: true, withdrawalDays: 21, proposedBy: null,
       },

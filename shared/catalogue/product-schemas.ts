@@ -18,6 +18,8 @@ export const productInputSchema = z
     storageUnit: z.enum(['F', 'C'], { message: 'Choose °F or °C.' }),
     freezeSensitive: z.boolean().default(true),
     useWithinMinutes: z.number().int('Whole minutes.').min(1, 'At least 1 minute.').max(48 * 60, 'At most 48 hours.').nullable().default(null),
+    /** Time out of a fridge (transfer, vaccination day) beyond which a hold goes to the veterinarian; null: no limit known. */
+    timeOutLimitMinutes: z.number().int('Whole minutes.').min(0, 'Not negative.').max(48 * 60, 'At most 48 hours.').nullable().default(null),
     /** Slaughter withdrawal from the label; 21 days when the label is silent is the usual default. */
     withdrawalDays: z.number().int('Whole days.').min(0, 'Not negative.').max(365, 'At most 365 days.').default(21),
     notes: z.string().trim().max(2000, 'At most 2000 characters.').default(''),
@@ -39,6 +41,7 @@ export interface ProductView {
   storageUnit: TemperatureUnit;
   freezeSensitive: boolean;
   useWithinMinutes: number | null;
+  timeOutLimitMinutes: number | null;
   withdrawalDays: number;
   notes: string;
   status: CatalogueStatus;

@@ -61,6 +61,18 @@ describe('the catalogue', () => {
     expect(presentation.packGtin).to.equal('09506000134352');
   });
 
+  it('keeps the time out of a fridge a product allows, empty meaning no limit known, and refuses a negative one', async () => {
+    const { agent, csrf } = await signInAs(['purchasing']);
+    const created = await agent.post('/api/catalogue/products').set('X-XSRF-TOKEN', csrf).send({ ...product, timeOutLimitMinutes: 30 });
+    expect(created.status, JSON.stringify(created.body)).to.equal(201);
+    expect(created.body.timeOutLimitMinutes).to.equal(30);
+    const silent = await agent.post('/api/catalogue/products').set('X-XSRF-TOKEN', csrf).send({ ...product, name: 'Second product' });
+    expect(silent.body.timeOutLimitMinutes).to.equal(null);
+    const negative = await agent.put(`/api/catalogue/products/${created.body.id}`).set('X-XSRF-TOKEN', csrf).send({ ...product, timeOutLimitMinutes: -5 });
+    expect(negative.status).to.equal(400);
+    expect(negative.body.error.fields[0]).to.include({ field: 'timeOutLimitMinutes' });
+  });
+
   it('receiving may propose but not edit the catalogue', async () => {
     const { agent, csrf } = await signInAs(['receiving']);
     expect((await agent.post('/api/catalogue/products').set('X-XSRF-TOKEN', csrf).send(product)).status).to.equal(403);

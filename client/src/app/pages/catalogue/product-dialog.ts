@@ -42,6 +42,7 @@ export class ProductDialog {
     storageUnit: [this.product?.storageUnit ?? ('F' as 'F' | 'C')],
     freezeSensitive: [this.product?.freezeSensitive ?? true],
     useWithinMinutes: [this.product?.useWithinMinutes ?? (null as number | null)],
+    timeOutLimitMinutes: [this.product?.timeOutLimitMinutes ?? (null as number | null), [Validators.min(0)]],
     withdrawalDays: [this.product?.withdrawalDays ?? 21, [Validators.required, Validators.min(0)]],
     notes: [this.product?.notes ?? ''],
   });
