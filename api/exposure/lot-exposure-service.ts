@@ -61,8 +61,8 @@ export async function computeLotExposure(sequelize: Sequelize, lotId: number, as
     readings,
     limits,
     freezeSensitive: product.freezeSensitive,
-    // No per-product time-out limit is recorded yet: every time out goes to the veterinarian as not known to be fine.
-    timeOutLimitMinutes: null,
+    // The product's own limit; none recorded means every time out goes to the veterinarian as not known to be fine.
+    timeOutLimitMinutes: product.timeOutLimitMinutes ?? null,
     asOf,
   });
   return { ...exposure, lotId, asOf, limits: { ...limits, ...range } };

@@ -25,10 +25,11 @@ import { CertificateDialog } from './certificate-dialog';
 import { durationText } from './duration-text';
 import { FridgeChart } from './fridge-chart';
 import { LoggerDialog } from './logger-dialog';
+import { CountDueNote } from '../stock-count/count-due-note';
 
 @Component({
   selector: 'vy-fridge',
-  imports: [FridgeChart, MatButtonModule, MatIconModule, MatTableModule, MatProgressBarModule, MatFormFieldModule, MatInputModule, RouterLink, DatePipe, DecimalPipe, TemperaturePipe],
+  imports: [FridgeChart, CountDueNote, MatButtonModule, MatIconModule, MatTableModule, MatProgressBarModule, MatFormFieldModule, MatInputModule, RouterLink, DatePipe, DecimalPipe, TemperaturePipe],
   templateUrl: './fridge.html',
   styleUrl: './fridge.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,4 @@
-// Home card for storage staff (admins and veterinarians too): fridges not checked today, open excursions, stale data, calibrations due.
+// Home card for storage staff (admins and veterinarians too): fridges not checked today, open excursions, stale data, calibrations and stock counts due.
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { DatePipe } from '@angular/common';
@@ -10,6 +10,8 @@ import { EMPTY } from 'rxjs';
 import { AuthStore } from '../../core/auth/auth-store';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { FridgesApi } from '../fridges/fridges-api';
+import { countDueReasonLabels } from '@shared/lots/count-due.js';
+import { LotsApi, type FridgeCountDue } from '../../shared/lots/lots-api';
 
 @Component({
   selector: 'vy-storage-card',
@@ -59,6 +61,14 @@ import { FridgesApi } from '../fridges/fridges-api';
                 }
               </ul>
             }
+            @if (countsDue()?.length) {
+              <h3>Stock count due</h3>
+              <ul>
+                @for (c of countsDue(); track c.fridgeId) {
+                  <li><a [routerLink]="['/fridges', c.fridgeId, 'count']">{{ c.fridgeCode }}</a> · {{ countDueText(c) }}</li>
+                }
+              </ul>
+            }
             @if (o.fridges.length && allClear()) {
               <p>Every fridge is checked, in range and reporting.</p>
             }
@@ -94,10 +104,16 @@ export class StorageCard {
     return this.auth.hasRole('admin', 'storage');
   });
   protected readonly overview = toSignal(this.auth.hasRole('admin', 'storage', 'veterinarian') ? inject(FridgesApi).overview() : EMPTY);
+  /** Counts due monthly and after each delivery into the fridge (common practice for vaccine stock). */
+  protected readonly countsDue = toSignal(this.auth.hasRole('admin', 'storage', 'veterinarian') ? inject(LotsApi).countsDue() : EMPTY);
   protected readonly unchecked = computed(() => (this.overview()?.fridges ?? []).filter((f) => f.checksToday < f.checksNeeded));
   protected readonly stale = computed(() => (this.overview()?.fridges ?? []).filter((f) => f.noRecentData));
   protected readonly allClear = computed(() => {
     const o = this.overview();
-    return !!o && !this.unchecked().length && !this.stale().length && !o.openExcursions.length && !o.calibrations.length;
+    return !!o && !this.unchecked().length && !this.stale().length && !o.openExcursions.length && !o.calibrations.length && !this.countsDue()?.length;
   });
+
+  protected countDueText(due: FridgeCountDue): string {
+    return due.reasons.map((r) => countDueReasonLabels[r]).join('; ');
+  }
 }

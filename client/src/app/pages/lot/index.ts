@@ -1,0 +1,1 @@
+export { LotDetail as default } from './lot';

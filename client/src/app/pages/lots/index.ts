@@ -1,0 +1,1 @@
+export { Lots as default } from './lots';

@@ -1,0 +1,1 @@
+export { StockCountSheet as default } from './stock-count';
