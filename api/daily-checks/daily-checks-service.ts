@@ -7,6 +7,7 @@ import { DailyCheck, Excursion, Fridge, User } from '../../database/models/index
 import { recordAudit } from '../audit/record-audit.js';
 import { fridgeLimits } from '../fridges/fridge-view.js';
 import { AppError } from '../http/app-error.js';
+import { openDailyCheckHolds } from '../holds/exposure-holds.js';
 
 type CheckRow = DailyCheck & { recorder?: User };
 
@@ -55,6 +56,7 @@ export async function recordDailyCheck(sequelize: Sequelize, actorId: number, in
       await recordAudit({ actorId, action: 'excursion.open', entity: 'excursion', entityId: excursion.id, after: excursion.toJSON() }, transaction);
       excursionId ??= excursion.id;
     }
+    await openDailyCheckHolds(sequelize, transaction, fridge, row, actorId);
     const recorder = await User.findByPk(actorId, { transaction });
     return toView(Object.assign(row, { recorder: recorder ?? undefined }), fridge, excursionId);
   });

@@ -11,6 +11,7 @@ import { fridgeLimits } from '../fridges/fridge-view.js';
 import { loadFridgeReadings, type FridgeReadings } from '../readings/load-fridge-readings.js';
 import { applyExcursionPlan, type AppliedPlan } from './apply-excursion-plan.js';
 import { findRecomputeWindow } from './find-recompute-window.js';
+import { openExposureHolds } from '../holds/exposure-holds.js';
 
 /** Readings loaded beyond the window on each side, so the readings at its edges are judged in context. */
 const CONTEXT_MS = 24 * 3_600_000;
@@ -78,6 +79,8 @@ export async function recomputeFridgeWindow(
   });
   await replaceSpans(sequelize, transaction, 'fridge_gaps', fridgeId, reach, gaps);
   await replaceSpans(sequelize, transaction, 'backup_fills', fridgeId, reach, fills);
+  // Lots are judged by their own product's range, which may be narrower than the fridge's: holds follow from that.
+  await openExposureHolds(sequelize, transaction, { fridge, readings: merged.readings, window: reach, actorId: options.actorId });
   return applied;
 }
 

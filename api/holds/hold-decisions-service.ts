@@ -7,6 +7,7 @@ import type { AppContext } from '../app-context.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { AppError } from '../http/app-error.js';
 import { postMovement } from '../lots/stock-ledger.js';
+import { notifyHoldDecided } from '../notifications/hold-notifications.js';
 
 export interface DecisionInput {
   decision: HoldDecisionKind;
@@ -99,6 +100,7 @@ export async function decideHold(context: AppContext, signerId: number, holdId: 
       }
     }
     const view = toDecisionView(row, new Set());
+    await notifyHoldDecided(transaction, hold, { id: row.id, decision: row.decision, condition: row.condition, signerName: row.signerName });
     await recordAudit({ actorId: signer.id, action: 'hold.decide', entity: 'hold', entityId: holdId, before: current ? toDecisionView(current, new Set()) : null, after: view }, transaction);
     return view;
   });

@@ -8,6 +8,13 @@ import { decideHold, holdDecisions, holdSiteId } from './hold-decisions-service.
 import { reviewQueue } from './review-queue.js';
 import { doNotUseTag } from './do-not-use-tag.js';
 import { lotSiteId } from '../exposure/lot-exposure-service.js';
+import { recallSchema } from '../../shared/lots/recall-schema.js';
+import { troubleshootingSchema } from '../../shared/lots/troubleshooting-schema.js';
+import { exposureEventSiteId } from './exposure-event-service.js';
+import { exposureEventDetail } from './exposure-event-detail.js';
+import { excursionReportPdf } from './excursion-report.js';
+import { placeRecall } from './recall-service.js';
+import { saveTroubleshootingRecord } from './troubleshooting-service.js';
 
 export function holdsRoutes(context: AppContext) {
   const router = createSecureRouter('/api/holds');
@@ -16,6 +23,29 @@ export function holdsRoutes(context: AppContext) {
   // Storage staff fill the troubleshooting side of these events; the veterinarian decides them.
   router.get('/queue', { roles: ['veterinarian', 'storage', 'admin'] }, async (req, res) => {
     res.json({ items: await reviewQueue(context.sequelize, req.user!) });
+  });
+
+  const eventOf = (req: { params: Record<string, string | string[]> }) => exposureEventSiteId(parseIdParam(req.params.exposureEventId));
+  const reviewers = { roles: ['veterinarian', 'storage', 'admin'] as const };
+
+  router.get('/events/:exposureEventId', { roles: [...reviewers.roles], siteOf: eventOf }, async (req, res) => {
+    res.json(await exposureEventDetail(context.sequelize, parseIdParam(req.params.exposureEventId)));
+  });
+
+  // Storage staff (and admins) write what they found and did; the veterinarian reads it beside the decision.
+  router.put('/events/:exposureEventId/troubleshooting', { roles: ['storage', 'admin'], siteOf: eventOf }, async (req, res) => {
+    const input = parseInput(troubleshootingSchema, req.body, 'troubleshooting record');
+    res.json(await saveTroubleshootingRecord(context.sequelize, req.user!.id, parseIdParam(req.params.exposureEventId), input));
+  });
+
+  router.get('/events/:exposureEventId/report.pdf', { roles: [...reviewers.roles], siteOf: eventOf }, async (req, res) => {
+    const report = await excursionReportPdf(context.sequelize, parseIdParam(req.params.exposureEventId));
+    res.type('application/pdf').attachment(report.fileName).send(report.pdf);
+  });
+
+  router.post('/recalls', { roles: ['veterinarian'] }, async (req, res) => {
+    const input = parseInput(recallSchema, req.body, 'recall');
+    res.status(201).json(await placeRecall(context.sequelize, req.user!.id, input));
   });
 
   router.get('/lots/:lotId/tag', { roles: 'signed-in', siteOf: (req) => lotSiteId(parseIdParam(req.params.lotId)) }, async (req, res) => {

@@ -1,6 +1,7 @@
 // The veterinarian's queue: every hold with no decision yet, grouped by the event behind it (an arrival, an excursion...).
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { QueueEvent } from '../../shared/lots/review-queue.js';
+import { addEventDetails } from './queue-event-details.js';
 
 interface Row {
   hold_id: number;
@@ -34,7 +35,10 @@ export async function reviewQueue(sequelize: Sequelize, user: Express.User): Pro
   for (const row of rows) {
     if (!user.allSites && !user.siteIds.includes(row.site_id)) continue;
     const key = `${row.cause}:${row.source_kind}:${row.source_id}`;
-    const event = events.get(key) ?? { cause: row.cause, sourceKind: row.source_kind, sourceId: row.source_id, openedAt: row.opened_at.toISOString(), lots: [], vials: 0, doses: 0 };
+    const event = events.get(key) ?? {
+      cause: row.cause, sourceKind: row.source_kind, sourceId: row.source_id, openedAt: row.opened_at.toISOString(), lots: [], vials: 0, doses: 0,
+      title: '', severe: false, exposureEvent: null, troubleshooting: null, recall: null,
+    };
     const doses = row.vials * row.doses_per_vial;
     event.lots.push({
       holdId: row.hold_id, lotId: row.lot_id, lotNumber: row.lot_number, expiry: row.expiry, product: row.product,
@@ -44,5 +48,7 @@ export async function reviewQueue(sequelize: Sequelize, user: Express.User): Pro
     event.doses += doses;
     events.set(key, event);
   }
-  return [...events.values()];
+  const details: QueueEvent[] = [];
+  for (const event of events.values()) details.push(await addEventDetails(sequelize, event));
+  return details;
 }

@@ -2,6 +2,7 @@
 import { QueryTypes, type Transaction } from 'sequelize';
 import { Hold, User } from '../../database/models/index.js';
 import type { HoldCause, HoldView } from '../../shared/lots/hold-causes.js';
+import { notifyHoldOpened } from '../notifications/hold-notifications.js';
 
 export interface HoldInput {
   lotId: number;
@@ -12,14 +13,22 @@ export interface HoldInput {
   openedBy: number | null;
 }
 
-/** Opens a hold once per lot, cause and source; a repeat (two lines of one lot in one shipment) adds nothing. */
-export async function openHold(hold: HoldInput, transaction: Transaction): Promise<void> {
-  await Hold.sequelize!.query(
+/**
+ * Opens a hold once per lot, cause and source; a repeat (two lines of one lot in one shipment) adds nothing.
+ * A new hold notifies the veterinarians, storage staff and admins of the lot's sites (one notification per event
+ * and user) in the same transaction; the e-mail copies go out after it commits. Returns the new hold's id, or null.
+ */
+export async function openHold(hold: HoldInput, transaction: Transaction): Promise<number | null> {
+  const [rows] = (await Hold.sequelize!.query(
     `INSERT INTO holds (lot_id, cause, source_kind, source_id, reason, opened_by)
      VALUES (:lotId, :cause, :sourceKind, :sourceId, :reason, :openedBy)
-     ON CONFLICT (lot_id, cause, source_kind, source_id) DO NOTHING`,
+     ON CONFLICT (lot_id, cause, source_kind, source_id) DO NOTHING
+     RETURNING id`,
     { replacements: { ...hold }, type: QueryTypes.INSERT, transaction },
-  );
+  )) as unknown as [{ id: number }[], number];
+  const id = rows[0]?.id ?? null;
+  if (id !== null) await notifyHoldOpened(transaction, hold);
+  return id;
 }
 
 /**

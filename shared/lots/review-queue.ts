@@ -1,4 +1,13 @@
 // The veterinarian's queue as the API sends it: undecided holds grouped by the event behind them.
+import type { ExposureEventView, TroubleshootingView } from './exposure-event-view.js';
+
+export interface QueueRecall {
+  id: number;
+  lotNumber: string;
+  reason: string;
+  placedBy: string;
+  placedAt: string;
+}
 export interface QueueLot {
   holdId: number;
   lotId: number;
@@ -21,4 +30,12 @@ export interface QueueEvent {
   lots: QueueLot[];
   vials: number;
   doses: number;
+  /** How the event is named wherever it appears. */
+  title: string;
+  /** Freezing of a freeze-sensitive product: shown as severe. */
+  severe: boolean;
+  /** The fridge readings behind an excursion or freeze hold, kept even when a recompute replaced the fridge's record. */
+  exposureEvent: ExposureEventView | null;
+  troubleshooting: TroubleshootingView | null;
+  recall: QueueRecall | null;
 }

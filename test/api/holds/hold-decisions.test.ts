@@ -3,7 +3,7 @@ import { expect } from 'chai';
 import { AuditEntry, Hold, HoldDecision, StockBalance, StockMovement } from '../../../database/models/index.js';
 import { undecidedHoldsByLot } from '../../../api/lots/holds.js';
 import { resetDatabase, testEnv } from '../../support/test-database.js';
-import { createSite, signInAs, testPassword } from '../../support/test-app.js';
+import { createSite, signInAs, testApp, testPassword } from '../../support/test-app.js';
 import { createPresentation, createProduct, createSiteFridge, stockLot } from '../../support/flock-fixtures.js';
 import { Sequelize } from 'sequelize';
 import { firstPagePng, inkShare, pdfText } from '../../support/pdf-pages.js';
@@ -17,6 +17,8 @@ async function heldLot(vials = 10) {
 }
 
 describe('hold decisions', () => {
+  // The models are bound when the app is built; building it first lets this file run on its own.
+  before(() => testApp());
   beforeEach(resetDatabase);
 
   it('a lot with two holds stays held until both are released; the signature keeps name, time and meaning', async () => {

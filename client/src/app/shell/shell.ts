@@ -13,10 +13,11 @@ import { map } from 'rxjs';
 import { roleLabels } from '@shared/auth/roles.js';
 import { AuthStore } from '../core/auth/auth-store';
 import { navItems } from './nav-items';
+import { NotificationBell } from './notification-bell';
 
 @Component({
   selector: 'vy-shell',
-  imports: [MatToolbarModule, MatSidenavModule, MatListModule, MatIconModule, MatButtonModule, MatMenuModule, RouterOutlet, RouterLink, RouterLinkActive],
+  imports: [MatToolbarModule, MatSidenavModule, MatListModule, MatIconModule, MatButtonModule, MatMenuModule, RouterOutlet, RouterLink, RouterLinkActive, NotificationBell],
   templateUrl: './shell.html',
   styleUrl: './shell.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

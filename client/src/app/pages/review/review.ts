@@ -6,8 +6,13 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
 import { AuthStore } from '../../core/auth/auth-store';
+import { NotificationsStore } from '../../core/notifications/notifications-store';
 import { DecisionDialog } from './decision-dialog';
+import { RecallDialog } from './recall-dialog';
+import { TroubleshootingDialog, type TroubleshootingDialogData } from './troubleshooting-dialog';
+import { formatTemperature, TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { ReviewApi, type QueueEvent, type QueueLot } from './review-api';
 
 const causeLabels: Record<string, string> = {
@@ -21,7 +26,7 @@ const causeLabels: Record<string, string> = {
 
 @Component({
   selector: 'vy-review',
-  imports: [MatCardModule, MatButtonModule, MatIconModule, DatePipe, DecimalPipe],
+  imports: [MatCardModule, MatButtonModule, MatIconModule, DatePipe, DecimalPipe, RouterLink, TemperaturePipe],
   templateUrl: './review.html',
   styleUrl: './review.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -30,21 +35,69 @@ export class Review {
   private readonly api = inject(ReviewApi);
   private readonly dialog = inject(MatDialog);
   private readonly auth = inject(AuthStore);
+  private readonly notifications = inject(NotificationsStore);
   protected readonly queue = rxResource({ stream: () => this.api.queue() });
-  protected readonly events = computed(() => this.queue.value() ?? []);
+  // Possible freezing first: it is the severe kind.
+  protected readonly events = computed(() => [...(this.queue.value() ?? [])].sort((a, b) => Number(b.severe) - Number(a.severe)));
   protected readonly canDecide = computed(() => {
     this.auth.user();
     return this.auth.hasRole('veterinarian');
+  });
+
+  /** Storage staff (and admins) fill the troubleshooting record; the veterinarian reads it. */
+  protected readonly canFill = computed(() => {
+    this.auth.user();
+    return this.auth.hasRole('storage', 'admin');
   });
 
   protected causeLabel(event: QueueEvent): string {
     return causeLabels[event.cause] ?? event.cause;
   }
 
+  /** The cause, and for a fridge event or a recall what it was (which fridge, which range; which lot number). */
+  protected heading(event: QueueEvent): string {
+    if (event.recall) return event.title;
+    const x = event.exposureEvent;
+    if (!x) return this.causeLabel(event);
+    // Built here rather than taken from the server's title, so the range is in the user's unit like the figures.
+    const unit = this.auth.displayUnit();
+    const where = x.source === 'daily_check' ? `${x.fridgeName}, daily check` : x.fridgeName;
+    const what = x.cause === 'freeze'
+      ? `at or below ${formatTemperature(0, unit)}`
+      : `${x.kind === 'high' ? 'above' : 'below'} the product range ${formatTemperature(x.lowC, unit)} to ${formatTemperature(x.highC, unit)}`;
+    return `${this.causeLabel(event)} · ${where}: ${what}${x.fridgeAlarmed ? '' : ' (no fridge alarm)'}`;
+  }
+
+  protected reportUrl(eventId: number): string {
+    return `/api/holds/events/${eventId}/report.pdf`;
+  }
+
+  protected fill(event: QueueEvent): void {
+    if (!event.exposureEvent) return;
+    const data: TroubleshootingDialogData = { eventId: event.exposureEvent.id, title: event.title, record: event.troubleshooting, unit: this.auth.displayUnit() };
+    this.dialog
+      .open(TroubleshootingDialog, { data, width: '720px', maxWidth: '95vw' })
+      .afterClosed()
+      .subscribe((saved) => saved && this.queue.reload());
+  }
+
+  protected placeRecall(): void {
+    this.dialog
+      .open(RecallDialog, { width: '520px', maxWidth: '95vw' })
+      .afterClosed()
+      .subscribe((placed) => placed && this.changed());
+  }
+
+  /** A decision or a recall notifies people, the signer included: the queue and the bell both refresh. */
+  private changed(): void {
+    this.queue.reload();
+    void this.notifications.refresh();
+  }
+
   protected decide(lot: QueueLot): void {
     this.dialog
       .open(DecisionDialog, { data: lot, width: '560px', maxWidth: '95vw' })
       .afterClosed()
-      .subscribe((signed) => signed && this.queue.reload());
+      .subscribe((signed) => signed && this.changed());
   }
 }

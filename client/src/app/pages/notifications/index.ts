@@ -1,0 +1,1 @@
+export { Notifications as default } from './notifications';
