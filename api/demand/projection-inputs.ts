@@ -14,6 +14,7 @@ import {
   PurchaseOrderLine,
   Site,
   StockBalance,
+  StockMovement,
   Supplier,
   Vaccination,
 } from '../../database/models/index.js';
@@ -24,6 +25,15 @@ import { siteSettingsSchema } from '../../shared/sites/site-schemas.js';
 import { siteToday } from '../flocks/site-today.js';
 import { AppError } from '../http/app-error.js';
 import { undecidedHoldsByLot } from '../lots/holds.js';
+
+async function vaccinationsWithVialsOut(vaccinationIds: number[]): Promise<Set<number>> {
+  if (!vaccinationIds.length) return new Set();
+  const issued = await StockMovement.findAll({
+    where: { kind: 'issue', sourceKind: 'vaccination', sourceId: vaccinationIds },
+    attributes: ['sourceId'],
+  });
+  return new Set(issued.map((m) => m.sourceId!));
+}
 
 /** Stock on order has no lot and so no expiry yet; it sorts after every real lot. */
 export const UNKNOWN_EXPIRY = '9999-12-31';
@@ -150,7 +160,10 @@ export async function loadProjectionInput(siteId: number, now = new Date()): Pro
   const flocks = await Flock.findAll({ where: { houseId: houses.map((h) => h.id), depletedOn: null }, include: [{ model: BirdCount, as: 'birdCounts' }] });
   const flockById = new Map(flocks.map((f) => [f.id, f]));
   const open = await Vaccination.findAll({ where: { flockId: flocks.map((f) => f.id), status: ['planned', 'confirmed'] } });
-  const vaccinations: ProjectionVaccination[] = open.map((v) => {
+  // Once vials left the fridge for a vaccination its need is met by them (unused ones come back as returns):
+  // planning it again from what is left would count those vials twice.
+  const underway = await vaccinationsWithVialsOut(open.map((v) => v.id));
+  const vaccinations: ProjectionVaccination[] = open.filter((v) => !underway.has(v.id)).map((v) => {
     const flock = flockById.get(v.flockId)!;
     return {
       id: v.id,

@@ -19,6 +19,8 @@ export const siteSettingsSchema = z.object({
     .default([30, 60, 90]),
   /** Days of margin taken off the order-by date on top of the supplier's lead time. */
   reorderMarginDays: z.number().int().min(0).max(60).default(3),
+  /** Vaccination day: above this expected temperature (°F) Vialyard advises spraying at night; null until the site sets one. */
+  sprayHeatLimitF: z.number().min(32).max(130).nullable().default(null),
 });
 
 export type SiteSettings = z.infer<typeof siteSettingsSchema>;

@@ -28,6 +28,7 @@ describe('sites', () => {
       projectionHorizonDays: 180,
       expiryAlertDays: [30, 60, 90],
       reorderMarginDays: 3,
+      sprayHeatLimitF: null,
     });
     expect(await AuditEntry.count({ where: { action: 'site.create' } })).to.equal(1);
   });

@@ -10,10 +10,11 @@ import { SitesCard } from './sites-card';
 import { StorageCard } from './storage-card';
 import { UsersCard } from './users-card';
 import { ReviewCard } from './review-card';
+import { CrewCard } from './crew-card';
 
 @Component({
   selector: 'vy-home',
-  imports: [MatChipsModule, SitesCard, UsersCard, ReceivingCard, PurchasingCard, PurchasingOutlookCard, StorageCard, ReviewCard],
+  imports: [MatChipsModule, SitesCard, UsersCard, ReceivingCard, PurchasingCard, PurchasingOutlookCard, StorageCard, ReviewCard, CrewCard],
   templateUrl: './home.html',
   styleUrl: './home.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

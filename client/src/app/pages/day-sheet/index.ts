@@ -1,0 +1,1 @@
+export { DaySheetPage as default } from './day-sheet';

@@ -1,0 +1,1 @@
+export { VaccinationRun as default } from './vaccination-run';
