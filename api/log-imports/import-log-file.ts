@@ -121,7 +121,7 @@ export async function importLogFile(sequelize: Sequelize, request: ImportRequest
           firstAt: new Date(first),
           lastAt: new Date(last),
           layout: file.layout,
-          warningCount: file.warnings.length,
+          warningCount: file.warningCount,
           warnings: file.warnings.slice(0, KEPT_WARNINGS),
           conflictSamples: stored.conflictSamples,
         },

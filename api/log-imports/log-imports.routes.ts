@@ -52,7 +52,8 @@ export function logImportsRoutes(context: AppContext) {
         const outcome = await importLogFile(context.sequelize, {
           loggerId: idFrom(req.params.loggerId),
           path: file.path,
-          fileName: Buffer.from(file.originalname, 'latin1').toString('utf8'),
+          // Control characters (a NUL above all) cannot be stored in a text column and mean nothing in a name.
+          fileName: Buffer.from(file.originalname, 'latin1').toString('utf8').replace(/[\u0000-\u001f\u007f]/g, ''),
           sizeBytes: file.size,
           mapping: parseMapping(fields.mapping),
           actorId: user.id,

@@ -9,7 +9,7 @@ import type { LogReading } from '../../shared/logs/log-reading.js';
 import { requireLayout } from '../../shared/logs/require-layout.js';
 import { sniffLog } from '../../shared/logs/sniff-log.js';
 import { splitCsvLine } from '../../shared/logs/split-csv-line.js';
-import { fileLines } from './file-lines.js';
+import { fileLines, MAX_LINE_CHARS } from './file-lines.js';
 import { isBlank } from '../../shared/logs/is-blank.js';
 
 /** As many lines as the sniffer looks at for the file's structure. */
@@ -45,7 +45,14 @@ async function dateOrderOfFile(path: string, delimiter: string, column: number, 
 /** Throws LogFileError (the user's to fix) when the layout cannot be settled. */
 export async function sniffLogFile(path: string, mapping: LogMapping): Promise<LogLayout> {
   const head: string[] = [];
-  for await (const { lines } of fileLines(path)) {
+  let firstOverlong = 0;
+  for await (const { lines, overlong } of fileLines(path)) {
+    // A line too long to be a row is read as blank here, and named if the file then cannot be read.
+    for (const index of overlong ?? []) {
+      if (head.length + index >= SNIFF_LINES) break;
+      lines[index] = '';
+      firstOverlong ||= head.length + index + 1;
+    }
     head.push(...lines.slice(0, SNIFF_LINES - head.length));
     if (head.length >= SNIFF_LINES) break;
   }
@@ -57,7 +64,23 @@ export async function sniffLogFile(path: string, mapping: LogMapping): Promise<L
     const order = column === undefined ? undefined : await dateOrderOfFile(path, found.delimiter ?? ',', column, found.headerLine ?? 1);
     if (order) sniff = sniffLog(head, { ...mapping, dateOrder: order });
   }
+  if (sniff.needs.length && firstOverlong) {
+    throw new LogFileError(`line ${firstOverlong} is longer than ${MAX_LINE_CHARS.toLocaleString('en-US')} characters, which no logger row is`);
+  }
+  if (sniff.needs.includes('header')) {
+    const what = documentKind(head);
+    if (what) throw new LogFileError(`it looks like ${what}, not a logger export: no header row and no readings found`);
+  }
   return requireLayout(sniff);
+}
+
+/** Text files that are plainly something else, to say so rather than only that no header was found. */
+function documentKind(head: readonly string[]): string | undefined {
+  const start = head.find((line) => line.trim() !== '')?.trimStart() ?? '';
+  if (/^<(!doctype html|html|head|body)\b/i.test(start)) return 'a web page (HTML)';
+  if (start.startsWith('<?xml') || start.startsWith('<')) return 'an XML document';
+  if (start.startsWith('{') || start.startsWith('[')) return 'a JSON document';
+  return undefined;
 }
 
 /** Throws LogFileError when fewer than two rows can be read. */
@@ -66,10 +89,15 @@ export async function readLogFile(path: string, layout: LogLayout, hooks: ReadHo
   let line = 0;
   let rowsRead = 0;
   let reported = 0;
-  for await (const { lines, bytesRead } of fileLines(path)) {
+  for await (const { lines, bytesRead, overlong } of fileLines(path)) {
     const batch: LogReading[] = [];
-    for (const text of lines) {
+    for (let i = 0; i < lines.length; i++) {
+      const text = lines[i];
       if (++line > layout.headerLine && !isBlank(text)) rowsRead++;
+      if (overlong?.includes(i)) {
+        reader.skipLine(`line is longer than ${MAX_LINE_CHARS.toLocaleString('en-US')} characters; row skipped`);
+        continue;
+      }
       const reading = reader.pushLine(text);
       if (reading) batch.push(reading);
     }

@@ -6,7 +6,7 @@ import type { LogLayout } from './log-layout.js';
 import type { LogReading } from './log-reading.js';
 import type { LogWarning } from './log-warning.js';
 import { orderReadings } from './order-readings.js';
-import { parseTemperatureCell } from './parse-temperature-cell.js';
+import { parseTemperatureCell, temperatureCellUnit } from './parse-temperature-cell.js';
 import { TimestampParser } from './parse-timestamp.js';
 import { CellPicker } from './cell-picker.js';
 import { splitCsvLine } from './split-csv-line.js';
@@ -16,13 +16,25 @@ import { isBlank } from './is-blank.js';
 export const PLAUSIBLE_LOW_C = -100;
 export const PLAUSIBLE_HIGH_C = 200;
 
+/** Warnings kept in full (the first, by line); `warningCount` counts them all, so a file of bad lines cannot fill memory. */
+export const KEPT_READ_WARNINGS = 1000;
+
 export interface LogReadResult {
   readonly layout: LogLayout;
   /** Sorted by time, one per instant. */
   readonly readings: readonly LogReading[];
   /** Data rows not used: unreadable ones and repeated timestamps. */
   readonly skipped: number;
+  /** The first KEPT_READ_WARNINGS warnings by line. */
   readonly warnings: readonly LogWarning[];
+  /** Every warning, kept or not. */
+  readonly warningCount: number;
+}
+
+/** A cell as a warning quotes it: control characters (a NUL cannot be stored in JSON text) shown as �, at most 40 characters. */
+function quoted(text: string): string {
+  const printable = text.replace(/[\u0000-\u001f\u007f]/g, '\ufffd');
+  return `'${printable.length > 40 ? `${printable.slice(0, 40)}…` : printable}'`;
 }
 
 function wallText(wallMs: number): string {
@@ -43,6 +55,7 @@ export class LogReader {
   private readonly warnings: LogWarning[] = [];
   private lineCount = 0;
   private skipped = 0;
+  private warningCount = 0;
   private latest = -Infinity;
   private firstOutOfOrderLine = 0;
 
@@ -67,6 +80,12 @@ export class LogReader {
     return this.tooShort(splitCsvLine(body, this.layout.delimiter), line);
   }
 
+  /** Counts a line that cannot be given to the reader (e.g. too long to keep) and warns about it. */
+  skipLine(message: string): undefined {
+    const line = ++this.lineCount;
+    return line <= this.layout.headerLine ? undefined : this.skip(line, message);
+  }
+
   pushRecord(fields: readonly string[], line: number): LogReading | undefined {
     if (line <= this.layout.headerLine) return undefined;
     if (fields.every((f) => f.trim() === '')) return undefined;
@@ -79,11 +98,19 @@ export class LogReader {
     const timeCell = cells[1];
     const dateCell = cells[2];
     const stamp = this.layout.dateColumn === undefined ? timeCell : `${dateCell.trim()} ${timeCell.trim()}`;
-    if (!this.parser.parse(stamp)) return this.skip(line, `time '${stamp.trim()}' cannot be read; row skipped`);
+    if (!this.parser.parse(stamp)) return this.skip(line, `time ${quoted(stamp.trim())} cannot be read; row skipped`);
     const tempText = tempCell.trim();
     if (tempText === '') return this.skip(line, 'temperature is empty; row skipped');
     const value = parseTemperatureCell(tempText, this.layout.decimalComma);
-    if (Number.isNaN(value)) return this.skip(line, `temperature '${tempText}' is not a number; row skipped`);
+    if (Number.isNaN(value)) return this.skip(line, `temperature ${quoted(tempText)} is not a number; row skipped`);
+    // A cell that names its unit must name the file's: 40 °F read as 40 °C would be an excursion that never was.
+    const lastCode = tempText.charCodeAt(tempText.length - 1) | 32;
+    if (lastCode === 99 || lastCode === 102) {
+      const cellUnit = temperatureCellUnit(tempText);
+      if (cellUnit !== undefined && cellUnit !== this.layout.unit) {
+        return this.skip(line, `temperature ${quoted(tempText)} is in °${cellUnit}, but the file's unit is °${this.layout.unit}; row skipped`);
+      }
+    }
     let at: number;
     if (Number.isNaN(this.parser.offsetMinutes)) {
       at = this.resolver.resolve(this.parser.wallMs);
@@ -98,7 +125,7 @@ export class LogReader {
     const tempC = this.toCelsius(value);
     // A cold-chain logger never records these; such a cell is a sentinel (e.g. -999) or a misread column.
     if (!(tempC >= PLAUSIBLE_LOW_C && tempC <= PLAUSIBLE_HIGH_C)) {
-      return this.skip(line, `temperature '${tempText}' is outside what a logger records (${PLAUSIBLE_LOW_C} to ${PLAUSIBLE_HIGH_C} °C); row skipped`);
+      return this.skip(line, `temperature ${quoted(tempText)} is outside what a logger records (${PLAUSIBLE_LOW_C} to ${PLAUSIBLE_HIGH_C} °C); row skipped`);
     }
     const reading: LogReading = { at, tempC, line };
     this.readings.push(reading);
@@ -107,16 +134,18 @@ export class LogReader {
 
   /** Throws LogFileError when fewer than two rows could be read. */
   finish(): LogReadResult {
-    const ordered = orderReadings(this.readings, this.firstOutOfOrderLine);
+    const ordered = orderReadings(this.readings, this.firstOutOfOrderLine, KEPT_READ_WARNINGS);
     if (ordered.readings.length < 2) {
       throw new LogFileError(`fewer than two readable rows (found ${ordered.readings.length})`);
     }
-    const warnings = [...this.warnings, ...ordered.warnings].sort((a, b) => a.line - b.line);
+    // Each list holds its first warnings, so the first of the two together are the file's first (by time for repeats in a sorted file).
+    const warnings = [...this.warnings, ...ordered.warnings].sort((a, b) => a.line - b.line).slice(0, KEPT_READ_WARNINGS);
     return {
       layout: this.layout,
       readings: ordered.readings,
       skipped: this.skipped + ordered.dropped,
       warnings,
+      warningCount: this.warningCount + ordered.warningCount,
     };
   }
 
@@ -126,7 +155,8 @@ export class LogReader {
 
   private skip(line: number, message: string): undefined {
     this.skipped++;
-    this.warnings.push({ line, message });
+    // Lines come in order, so the kept ones are the first.
+    if (++this.warningCount <= KEPT_READ_WARNINGS) this.warnings.push({ line, message });
     return undefined;
   }
 }

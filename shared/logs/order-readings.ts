@@ -5,7 +5,9 @@ import type { LogWarning } from './log-warning.js';
 export interface OrderedReadings {
   readonly readings: LogReading[];
   readonly dropped: number;
+  /** The first `keptWarnings` warnings by line. */
   readonly warnings: LogWarning[];
+  readonly warningCount: number;
 }
 
 /** Line of the first reading earlier than one before it, 0 when all are in order. */
@@ -25,12 +27,15 @@ function firstOutOfOrder(readings: readonly LogReading[]): number {
 export function orderReadings(
   readings: readonly LogReading[],
   outOfOrderLine = firstOutOfOrder(readings),
+  keptWarnings = Infinity,
 ): OrderedReadings {
   const warnings: LogWarning[] = [];
+  let warningCount = 0;
   let sorted = readings;
   if (outOfOrderLine > 0) {
     // Ties broken by line so the first row in the file is the one kept below.
     sorted = [...readings].sort((a, b) => a.at - b.at || a.line - b.line);
+    warningCount++;
     warnings.push({
       line: outOfOrderLine,
       message: `rows are not in time order (first at line ${outOfOrderLine}); they were sorted by time`,
@@ -42,9 +47,13 @@ export function orderReadings(
     const previous = kept[kept.length - 1];
     if (previous !== undefined && previous.at === reading.at) {
       dropped++;
-      const at = new Date(reading.at).toISOString();
-      warnings.push({ line: reading.line, message: `repeats time ${at} of line ${previous.line}; row skipped` });
+      warningCount++;
+      if (warnings.length < keptWarnings) {
+        const at = new Date(reading.at).toISOString();
+        warnings.push({ line: reading.line, message: `repeats time ${at} of line ${previous.line}; row skipped` });
+      }
     } else kept.push(reading);
   }
-  return { readings: kept, dropped, warnings };
+  // Past the cap repeats are only counted (they are met in time order, which is line order unless the file was sorted).
+  return { readings: kept, dropped, warnings, warningCount };
 }

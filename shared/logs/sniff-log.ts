@@ -89,7 +89,10 @@ export function sniffLog(lines: readonly string[], mapping: LogMapping = {}): Lo
     mapping.unit ??
     (tempColumn === undefined ? undefined : unitFromHeader(header[tempColumn] ?? '')) ??
     (valueUnits.size === 1 ? [...valueUnits][0] : undefined);
-  if (unit === undefined && tempColumn !== undefined) needs.push('unit');
+  if (unit === undefined && tempColumn !== undefined) {
+    if (valueUnits.size > 1) notes.push('the temperature cells mix °F and °C');
+    needs.push('unit');
+  }
 
   const dateCellAt = time.dateColumn ?? time.timeColumn;
   const dateCells = function* () {
