@@ -6,6 +6,8 @@ export const photoLimits = {
   maxPerShipment: 24,
   /** Decoded pixels: refuses decompression bombs; phone cameras save 12–50 megapixels. */
   maxInputPixels: 100_000_000,
+  /** EXIF, XMP, ICC and other blocks of a JPEG: tens of kB from a camera, a few hundred with previews (common practice). */
+  maxMetadataBytes: 4 * 1024 * 1024,
   displaySize: 1600,
   thumbSize: 320,
 } as const;

@@ -1,6 +1,7 @@
 // Turns an uploaded photo into what is kept: decoded by sharp whatever its name or type claims, upright, without metadata.
 import sharp from 'sharp';
 import { AppError } from '../http/app-error.js';
+import { jpegMetadataBytes } from './jpeg-metadata-bytes.js';
 import { photoLimits } from './photo-limits.js';
 
 export interface ProcessedPhoto {
@@ -26,6 +27,10 @@ function refuse(status: number, index: number, name: string, message: string): A
 export async function processPhoto(file: { buffer: Buffer; originalname: string }, index: number): Promise<ProcessedPhoto> {
   const name = cleanFileName(file.originalname) || `photo ${index + 1}`;
   const input = () => sharp(file.buffer, { limitInputPixels: photoLimits.maxInputPixels, failOn: 'error' });
+  // The blocks are dropped from what is kept, but megabytes of them are no camera's doing.
+  if (jpegMetadataBytes(file.buffer) > photoLimits.maxMetadataBytes) {
+    throw refuse(400, index, name, `carries more than ${photoLimits.maxMetadataBytes / 1024 / 1024} MB of metadata (EXIF and other blocks); no camera photo does.`);
+  }
   try {
     const metadata = await input().metadata();
     if (!metadata.format || !acceptedFormats.has(metadata.format)) {
