@@ -15,6 +15,9 @@ import { errorHandler } from './http/error-handler.js';
 import { createSecureRouter, type SecureRouter } from './http/secure-router.js';
 import { exposureRoutes } from './exposure/exposure.routes.js';
 import { holdsRoutes } from './holds/holds.routes.js';
+import { notificationsRoutes } from './notifications/notifications.routes.js';
+import { lotsRoutes } from './lots/lots.routes.js';
+import { stockCountsRoutes } from './stock-counts/stock-counts.routes.js';
 import { outboxRoutes } from './outbox/outbox.routes.js';
 import { sitesRoutes } from './sites/sites.routes.js';
 import { usersRoutes } from './users/users.routes.js';
@@ -32,7 +35,9 @@ import { housesRoutes } from './houses/houses.routes.js';
 import { flocksRoutes } from './flocks/flocks.routes.js';
 import { programmesRoutes } from './programmes/programmes.routes.js';
 import { vaccinationsRoutes } from './vaccinations/vaccinations.routes.js';
+import { vaccinationDayRoutes } from './vaccination-day/vaccination-day.routes.js';
 import { demandRoutes } from './demand/demand.routes.js';
+import { refuseNulText } from './http/refuse-nul-text.js';
 
 /** Every feature's router; a new feature adds one line here. */
 function featureRouters(context: AppContext): SecureRouter[] {
@@ -55,9 +60,13 @@ function featureRouters(context: AppContext): SecureRouter[] {
     flocksRoutes(context),
     programmesRoutes(context),
     vaccinationsRoutes(context),
+    vaccinationDayRoutes(context),
     demandRoutes(context),
     exposureRoutes(context),
     holdsRoutes(context),
+    notificationsRoutes(context),
+    lotsRoutes(context),
+    stockCountsRoutes(context),
   ];
 }
 
@@ -106,6 +115,7 @@ export function createApp(context: AppContext): Express {
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  app.use(refuseNulText);
 
   const PgStore = connectPgSimple(session);
   app.use(
