@@ -10,12 +10,16 @@ import { initReceivingModels } from './receiving-models.js';
 import { initFridgeLogModels } from './fridge-log-models.js';
 import { initFlockModels } from './flock-models.js';
 import { initLotReviewModels } from './lot-review-models.js';
+import { initStockCountModels } from './stock-count-models.js';
+import { initHoldEventModels } from './hold-event-models.js';
 
 export { AuditEntry, Fridge, House, Site, User, UserSite };
 export * from './receiving-models.js';
 export * from './fridge-log-models.js';
 export * from './flock-models.js';
 export * from './lot-review-models.js';
+export * from './stock-count-models.js';
+export * from './hold-event-models.js';
 
 export function initModels(sequelize: Sequelize): void {
   for (const model of [Site, User, UserSite, AuditEntry, House, Fridge]) model.initModel(sequelize);
@@ -30,6 +34,8 @@ export function initModels(sequelize: Sequelize): void {
   initFridgeLogModels(sequelize);
   initFlockModels(sequelize);
   initLotReviewModels(sequelize);
+  initStockCountModels(sequelize);
+  initHoldEventModels(sequelize);
 }
 
 /** Opens the application's connection pool (as the application role) with every model ready. */

@@ -7,6 +7,8 @@ import { createCatalogue, createPurchaseOrder, makeJpeg } from './receiving-fixt
 import { testConfig } from './test-app.js';
 import { fridgeRecordMakers } from './fridge-records.js';
 import { flockRecordMakers } from './flock-records.js';
+import { vaccinationDayRecordMakers } from './vaccination-day-records.js';
+import { holdEventRecordMakers } from './hold-event-records.js';
 import { createPresentation, createProduct, createSiteFridge, stockLot } from './flock-fixtures.js';
 
 type RecordMaker = (siteId: number) => Promise<number>;
@@ -63,6 +65,8 @@ export const siteRecordMakers: Record<string, RecordMaker> = {
   holdId: makeHold,
   ...fridgeRecordMakers,
   ...flockRecordMakers,
+  ...vaccinationDayRecordMakers,
+  ...holdEventRecordMakers,
 };
 
 /** The route's path for a site: :siteId becomes the site, a known record parameter a record made on it, any other 1. */

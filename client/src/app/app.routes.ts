@@ -70,6 +70,24 @@ export const routes: Routes = [
         loadComponent: () => import('./pages/fridge'),
       },
       {
+        path: 'fridges/:fridgeId/count',
+        canActivate: [roleGuard('admin', 'storage', 'veterinarian')],
+        title: 'Stock count · Vialyard',
+        loadComponent: () => import('./pages/stock-count'),
+      },
+      {
+        path: 'lots',
+        canActivate: [roleGuard('admin', 'storage', 'purchasing', 'veterinarian', 'receiving')],
+        title: 'Lots · Vialyard',
+        loadComponent: () => import('./pages/lots'),
+      },
+      {
+        path: 'lots/:lotId',
+        canActivate: [roleGuard('admin', 'storage', 'purchasing', 'veterinarian', 'receiving')],
+        title: 'Lot · Vialyard',
+        loadComponent: () => import('./pages/lot'),
+      },
+      {
         path: 'fridges/:fridgeId/import',
         canActivate: [roleGuard('admin', 'storage')],
         title: 'Import a logger file · Vialyard',
@@ -80,6 +98,18 @@ export const routes: Routes = [
         canActivate: [roleGuard('admin', 'storage')],
         title: 'Daily check · Vialyard',
         loadComponent: () => import('./pages/daily-check'),
+      },
+      {
+        path: 'vaccination-day',
+        canActivate: [roleGuard('admin', 'veterinarian', 'crew')],
+        title: 'Day sheet · Vialyard',
+        loadComponent: () => import('./pages/day-sheet'),
+      },
+      {
+        path: 'vaccination-day/:vaccinationId',
+        canActivate: [roleGuard('admin', 'veterinarian', 'crew')],
+        title: 'Vaccination · Vialyard',
+        loadComponent: () => import('./pages/vaccination-run'),
       },
       {
         path: 'flocks',
@@ -111,6 +141,7 @@ export const routes: Routes = [
         title: 'Review · Vialyard',
         loadComponent: () => import('./pages/review'),
       },
+      { path: 'notifications', title: 'Notifications · Vialyard', loadComponent: () => import('./pages/notifications') },
       { path: 'account', title: 'My account · Vialyard', loadComponent: () => import('./pages/account') },
       { path: '**', title: 'Not found · Vialyard', loadComponent: () => import('./pages/not-found') },
     ],
