@@ -38,6 +38,7 @@ export async function daySheet(context: AppContext, viewer: Express.User, day: s
     dosesNeeded: run.dosesNeeded,
     shortfallDoses: run.shortfallDoses,
     lotsToTake: run.lotsToTake,
+    awaited: run.awaited,
     waterMl: run.waterMl,
     status: run.status,
     blockers: run.blockers.length,

@@ -38,6 +38,7 @@ export async function loadRunView(context: AppContext, vaccinationId: number, op
     shortfallDoses: planned?.shortfallDoses ?? 0,
     // Once vials are out the fridges no longer hold them, so the plan would count them again: the lots out speak instead.
     lotsToTake: lotsOut.length ? [] : await lotsToTake(site.id, planned),
+    awaited: lotsOut.length ? [] : (planned?.allocations ?? []).flatMap((a) => (a.source === 'stock' ? [] : [{ source: a.source, label: a.label, doses: a.doses }])),
     waterMlPer1000: facts.water?.mlPer1000 ?? null,
     waterSource: facts.water?.source ?? null,
     waterMl: facts.waterMl,

@@ -21,9 +21,9 @@ import { parseInput } from '../http/validate.js';
 import { photoUpload, uploadedPhotos } from '../photos/photo-upload.js';
 import { processPhotos } from '../photos/process-photo.js';
 import { siteOfVaccination } from '../vaccinations/vaccinations-service.js';
-import { assignCrew, siteCrew } from './crew-service.js';
+import { assignCrew, dayLeads, siteCrew } from './crew-service.js';
 import { daySheet } from './day-sheet-service.js';
-import { crewAssigners, dayWorkers, historyReaders, waterVolumeKeepers } from './day-roles.js';
+import { crewAssigners, dayPlanners, dayWorkers, historyReaders, waterVolumeKeepers } from './day-roles.js';
 import { flockHistoryCsv, flockHistoryPdf } from './flock-history.js';
 import { mixingSheetPdf } from './mixing-sheet-pdf.js';
 import { overrideCheck, recordMemberCheck, recordVaccinationCheck, startVaccination } from './readiness-service.js';
@@ -42,7 +42,15 @@ export function vaccinationDayRoutes(context: AppContext) {
 
   router.get('/sheet', { roles: dayWorkers }, async (req, res) => {
     const query = parseInput(daySheetQuerySchema, req.query, 'query');
+    const planner = req.user!.roles.some((role) => (dayPlanners as readonly string[]).includes(role));
+    // A crew lead reads their own sheet; admins and veterinarians read anyone's.
+    if (query.leadId !== undefined && query.leadId !== req.user!.id && !planner) throw AppError.forbidden('A crew lead reads their own day sheet only.');
     res.json(await daySheet(context, req.user!, query.day, query.leadId ?? req.user!.id));
+  });
+
+  router.get('/leads', { roles: dayPlanners }, async (req, res) => {
+    const { day } = parseInput(crewQuerySchema.required(), req.query, 'query');
+    res.json({ items: await dayLeads(context, req.user!, day) });
   });
 
   router.post('/crews', { roles: crewAssigners }, async (req, res) => {

@@ -56,6 +56,8 @@ export interface RunView {
   dosesNeeded: number;
   shortfallDoses: number;
   lotsToTake: LotToTake[];
+  /** Doses the plan takes from an order or a transfer not yet in the site's fridges (the crew cannot take them yet). */
+  awaited: { source: 'order' | 'transfer'; label: string; doses: number }[];
   /** mL per 1,000 birds from the label or the veterinarian; null when nobody entered it. */
   waterMlPer1000: number | null;
   waterSource: 'label' | 'veterinarian' | null;
@@ -88,6 +90,8 @@ export interface DaySheetEntry {
   dosesNeeded: number;
   shortfallDoses: number;
   lotsToTake: LotToTake[];
+  /** Doses the plan takes from an order or a transfer not yet in the site's fridges (the crew cannot take them yet). */
+  awaited: { source: 'order' | 'transfer'; label: string; doses: number }[];
   waterMl: number | null;
   status: string;
   blockers: number;

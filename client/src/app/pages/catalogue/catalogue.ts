@@ -13,6 +13,8 @@ import { productKindLabels, productRouteLabels } from '@shared/catalogue/product
 import type { PresentationView } from '@shared/catalogue/presentation-schemas.js';
 import type { ProductView } from '@shared/catalogue/product-schemas.js';
 import type { SupplierView } from '@shared/catalogue/supplier-schemas.js';
+import { RouterLink } from '@angular/router';
+import { AuthStore } from '../../core/auth/auth-store';
 import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
 import { PresentationDialog, type PresentationDialogData } from './presentation-dialog';
 import { ProductDialog } from './product-dialog';
@@ -20,7 +22,7 @@ import { SupplierDialog } from './supplier-dialog';
 
 @Component({
   selector: 'vy-catalogue',
-  imports: [MatTabsModule, MatTableModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatSlideToggleModule],
+  imports: [MatTabsModule, MatTableModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatSlideToggleModule, RouterLink],
   templateUrl: './catalogue.html',
   styleUrl: './catalogue.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,6 +30,12 @@ import { SupplierDialog } from './supplier-dialog';
 export class Catalogue {
   private readonly api = inject(CatalogueApi);
   private readonly dialog = inject(MatDialog);
+  private readonly auth = inject(AuthStore);
+  /** Water volumes are kept by admins and veterinarians (purchasing reads the catalogue only). */
+  protected readonly keepsWater = computed(() => {
+    this.auth.user();
+    return this.auth.hasRole('admin', 'veterinarian');
+  });
   protected readonly kindLabels = productKindLabels;
   protected readonly routeLabels = productRouteLabels;
   protected readonly filter = signal('');

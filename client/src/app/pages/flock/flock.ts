@@ -48,6 +48,14 @@ export class Flock {
     this.auth.user();
     return this.auth.hasRole('admin', 'purchasing', 'veterinarian') && !this.flock.value()?.depletedOn;
   });
+  /** The signed vaccination records as files, for the roles the API lets read them (api/vaccination-day/day-roles.ts). */
+  protected readonly readsHistory = computed(() => {
+    this.auth.user();
+    return this.auth.hasRole('admin', 'purchasing', 'veterinarian', 'crew');
+  });
+  protected historyUrl(format: 'csv' | 'pdf'): string {
+    return `/api/vaccination-day/flocks/${this.flockId()}/history.${format}`;
+  }
   protected readonly isVeterinarian = computed(() => {
     this.auth.user();
     return this.auth.hasRole('veterinarian');

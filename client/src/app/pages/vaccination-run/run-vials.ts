@@ -24,6 +24,9 @@ import { RunStep } from './run-step';
           }
         </ul>
       }
+      @for (a of run().awaited; track $index) {
+        <p class="form-error">{{ a.doses }} doses are planned from {{ a.source }} {{ a.label }}, which is not in the site's fridges yet: receive it before taking vials.</p>
+      }
       @if (run().lotsOut.length) {
         <p>Out of the fridge:</p>
         <ul class="plain">

@@ -1,11 +1,31 @@
 // The vaccination day's API: the day sheet, one vaccination's run, and each step of it.
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import type { Observable } from 'rxjs';
+import { map, type Observable } from 'rxjs';
 import type { DaySheet, RunView } from '@shared/vaccination-day/day-views.js';
 import { handlesOwnErrors } from '../../core/http/error-interceptor';
 
 export type { DaySheet, DaySheetEntry, RunView, CheckView, LotOut, LotToTake } from '@shared/vaccination-day/day-views.js';
+
+export interface DayLead {
+  id: number;
+  name: string;
+  siteNames: string[];
+}
+
+/** An entered water volume as the API lists it (shape of api/vaccination-day/water-volumes-service.ts). */
+export interface WaterVolume {
+  id: number;
+  productId: number;
+  productName: string;
+  ageFromDays: number;
+  ageToDays: number;
+  mlPer1000Birds: number;
+  source: 'label' | 'veterinarian';
+  note: string;
+  enteredBy: string;
+  enteredAt: string;
+}
 
 export interface SiteCrew {
   day: string;
@@ -18,8 +38,23 @@ export class DayApi {
   private readonly http = inject(HttpClient);
   private readonly base = '/api/vaccination-day';
 
-  sheet(day: string): Observable<DaySheet> {
-    return this.http.get<DaySheet>(`${this.base}/sheet`, { params: { day } });
+  /** A crew lead's day sheet: one's own, or (admins and veterinarians) the lead's given. */
+  sheet(day: string, leadId?: number | null): Observable<DaySheet> {
+    return this.http.get<DaySheet>(`${this.base}/sheet`, { params: leadId ? { day, leadId } : { day } });
+  }
+
+  /** The crew leads assigned on a day, on the sites one sees. */
+  leads(day: string): Observable<DayLead[]> {
+    return this.http.get<{ items: DayLead[] }>(`${this.base}/leads`, { params: { day } }).pipe(map((body) => body.items));
+  }
+
+  waterVolumes(productId?: number): Observable<WaterVolume[]> {
+    const params: Record<string, number> = productId ? { productId } : {};
+    return this.http.get<{ items: WaterVolume[] }>(`${this.base}/water-volumes`, { params }).pipe(map((body) => body.items));
+  }
+
+  historyUrl(flockId: number, format: 'csv' | 'pdf'): string {
+    return `${this.base}/flocks/${flockId}/history.${format}`;
   }
 
   run(vaccinationId: number): Observable<RunView> {

@@ -1,0 +1,1 @@
+export { WaterVolumesPage as default } from './water-volumes';
