@@ -1,5 +1,11 @@
 // The one-line reason an automatic hold carries: which fridge, which side of which range, how far and how long.
 import { formatRange } from '../../shared/exposure/exposure-event-title.js';
+import { celsiusToFahrenheit } from '../../shared/temperature/convert-temperature.js';
+
+/** A peak in the unit the product's range is written in, so one sentence never mixes °F and °C. */
+function peakText(peakC: number, unit: 'F' | 'C'): string {
+  return unit === 'F' ? `${celsiusToFahrenheit(peakC).toFixed(1)} °F` : `${peakC.toFixed(1)} °C`;
+}
 
 export function exposureReason(input: {
   cause: 'excursion' | 'freeze';
@@ -15,5 +21,5 @@ export function exposureReason(input: {
   }
   const side = input.kind === 'high' ? 'above' : 'below';
   const peak = input.kind === 'high' ? 'highest' : 'lowest';
-  return `${input.fridgeName} read ${side} the product's range ${formatRange(input.range)} ${duration} (${peak} ${input.peakC.toFixed(1)} °C).`;
+  return `${input.fridgeName} read ${side} the product's range ${formatRange(input.range)} ${duration} (${peak} ${peakText(input.peakC, input.range.unit)}).`;
 }

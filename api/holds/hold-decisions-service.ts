@@ -8,6 +8,7 @@ import { recordAudit } from '../audit/record-audit.js';
 import { AppError } from '../http/app-error.js';
 import { postMovement } from '../lots/stock-ledger.js';
 import { notifyHoldDecided } from '../notifications/hold-notifications.js';
+import { updateExcursionReviewStatus } from './excursion-review-status.js';
 
 export interface DecisionInput {
   decision: HoldDecisionKind;
@@ -101,6 +102,7 @@ export async function decideHold(context: AppContext, signerId: number, holdId: 
     }
     const view = toDecisionView(row, new Set());
     await notifyHoldDecided(transaction, hold, { id: row.id, decision: row.decision, condition: row.condition, signerName: row.signerName });
+    await updateExcursionReviewStatus(context.sequelize, transaction, hold, signer.id);
     await recordAudit({ actorId: signer.id, action: 'hold.decide', entity: 'hold', entityId: holdId, before: current ? toDecisionView(current, new Set()) : null, after: view }, transaction);
     return view;
   });

@@ -16,7 +16,7 @@ const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
 
 /** A small deterministic wobble, so the demo looks the same on every machine. */
-function wobble(seed: number): () => number {
+export function wobble(seed: number): () => number {
   let state = seed;
   return () => {
     state = (state * 1_103_515_245 + 12_345) % 2_147_483_648;
@@ -24,7 +24,7 @@ function wobble(seed: number): () => number {
   };
 }
 
-interface Plan {
+export interface Plan {
   start: number;
   end: number;
   stepMinutes: number;
@@ -32,7 +32,7 @@ interface Plan {
   temp: (at: number) => number | null;
 }
 
-function readings(plan: Plan): [number, number][] {
+export function readings(plan: Plan): [number, number][] {
   const out: [number, number][] = [];
   for (let at = plan.start; at <= plan.end; at += plan.stepMinutes * 60_000) {
     const t = plan.temp(at);
@@ -42,7 +42,7 @@ function readings(plan: Plan): [number, number][] {
 }
 
 /** A °F export with metadata lines and local times, the way many loggers write it. */
-function fahrenheitFile(serial: string, zone: string, rows: [number, number][]): string {
+export function fahrenheitFile(serial: string, zone: string, rows: [number, number][]): string {
   const lines = [`Logger serial,${serial}`, `Exported,${DateTime.now().setZone(zone).toFormat('yyyy-MM-dd HH:mm')}`, '', 'Date/Time,Temperature (°F),Battery (%)'];
   for (const [at, c] of rows) lines.push(`${DateTime.fromMillis(at, { zone }).toFormat('yyyy-MM-dd HH:mm')},${celsiusToFahrenheit(c).toFixed(1)},87`);
   return `${lines.join('\r\n')}\r\n`;
@@ -58,7 +58,7 @@ function celsiusFile(zone: string, rows: [number, number][]): string {
   return `${lines.join('\n')}\n`;
 }
 
-async function certificatePdf(serial: string, calibrated: string): Promise<Buffer> {
+export async function certificatePdf(serial: string, calibrated: string): Promise<Buffer> {
   const doc = createPdf({ title: `Calibration certificate ${serial} (demo)` });
   doc.font(pdfFonts.bold).fontSize(18).text('Calibration certificate (demo)');
   doc.font(pdfFonts.regular).fontSize(11).moveDown().text(`Logger serial: ${serial}`).text(`Calibrated on: ${calibrated}`).text('Result: within ±0.5 °C at 2, 5 and 8 °C (invented for the demo).');

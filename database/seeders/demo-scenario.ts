@@ -5,6 +5,8 @@ import { Fridge, House, Site, User, UserSite } from '../models/index.js';
 import { seedDemoReceiving } from './demo-receiving.js';
 import { seedDemoFridgeLogs } from './demo-fridge-logs.js';
 import { seedDemoFlocks } from './demo-flocks.js';
+import { seedDemoReview } from './demo-review.js';
+import { seedDemoVaccinationDay } from './demo-vaccination-day.js';
 
 export interface DemoAccount {
   email: string;
@@ -68,7 +70,9 @@ export async function seedDemoScenario(sequelize: Sequelize, hash: (password: st
     }
     await seedDemoReceiving(transaction);
     await seedDemoFlocks(transaction);
+    await seedDemoVaccinationDay(transaction);
   });
   await seedDemoFridgeLogs(sequelize);
+  await seedDemoReview(sequelize);
   return true;
 }

@@ -106,6 +106,12 @@ export const routes: Routes = [
         loadComponent: () => import('./pages/day-sheet'),
       },
       {
+        path: 'vaccination-day/water-volumes',
+        canActivate: [roleGuard('admin', 'veterinarian')],
+        title: 'Water volumes · Vialyard',
+        loadComponent: () => import('./pages/water-volumes'),
+      },
+      {
         path: 'vaccination-day/:vaccinationId',
         canActivate: [roleGuard('admin', 'veterinarian', 'crew')],
         title: 'Vaccination · Vialyard',

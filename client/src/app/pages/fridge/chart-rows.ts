@@ -29,7 +29,8 @@ function breakAtGaps(points: ChartXY[]): ChartXY[] {
   return out;
 }
 
-export function chartSeries(data: ChartData, unit: TemperatureUnit) {
+/** The series in the user's unit; `band` replaces the fridge's alarm range as the shaded allowed band. */
+export function chartSeries(data: ChartData, unit: TemperatureUnit, band: { lowC: number; highC: number } | null = null) {
   const t = (c: number) => Math.round(fromCelsius(c, unit) * 100) / 100;
   const half = (data.bucketMinutes * 60_000) / 2;
   const primaryPoints = breakAtGaps(data.primary.points.map((p) => ({ x: Date.parse(p.at), y: t(p.tempC) })));
@@ -39,7 +40,7 @@ export function chartSeries(data: ChartData, unit: TemperatureUnit) {
     ...data.backup.points.map((p) => ({ x: Date.parse(p.at), y: t(p.tempC) })),
     ...data.backup.buckets.flatMap((b) => [{ x: Date.parse(b.at) + half, y: t(b.maxC) }, { x: Date.parse(b.at) + half, y: t(b.minC) }]),
   ];
-  return { primaryPoints, highs, lows, backup, low: t(data.lowC), high: t(data.highC) };
+  return { primaryPoints, highs, lows, backup, low: t(band?.lowC ?? data.lowC), high: t(band?.highC ?? data.highC) };
 }
 
 export function chartTableRows(data: ChartData, unit: TemperatureUnit): ChartTableRow[] {

@@ -1,4 +1,5 @@
 // The fridge's temperature chart for a day, week, month, year or any range, with the allowed band and excursions shaded.
+// The review embeds it too: a fixed window around one event, shaded with the product's range instead of the fridge's.
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { DatePipe, DecimalPipe } from '@angular/common';
@@ -23,8 +24,20 @@ import { chartSeries, chartTableRows, type ChartTableRow } from './chart-rows';
 const timeLabel = new Intl.DateTimeFormat(undefined, { month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
 const dayLabel = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
 
+/** What the chart needs of an excursion: its span. */
+export type ChartExcursion = Pick<ExcursionView, 'start' | 'end'>;
+
+/** A band to shade instead of the fridge's alarm range, such as a product's label range. */
+export interface ChartBand {
+  lowC: number;
+  highC: number;
+  label: string;
+}
+
+let nextChartId = 0;
+
 /** Draws each excursion's span as a shaded column behind the lines. */
-function excursionShading(excursions: () => ExcursionView[], color: string): Plugin<'line'> {
+function excursionShading(excursions: () => ChartExcursion[], color: string): Plugin<'line'> {
   return {
     id: 'vyExcursions',
     beforeDatasetsDraw(chart: Chart) {
@@ -51,9 +64,20 @@ function excursionShading(excursions: () => ExcursionView[], color: string): Plu
 })
 export class FridgeChart {
   readonly fridgeId = input.required<number>();
-  readonly excursions = input<ExcursionView[]>([]);
+  readonly excursions = input<ChartExcursion[]>([]);
   /** The newest reading: the first range shown ends there, so a fridge without recent data still shows its last week. */
   readonly endAt = input<string | null>(null);
+  /** A fixed first range (ISO instants), shown as a custom range; it wins over `endAt`. */
+  readonly window = input<{ from: string; to: string } | null>(null);
+  /** The toggle that brings the window back. */
+  readonly windowLabel = input('Around the event');
+  /** The band shaded as allowed; the fridge's alarm range when not given. */
+  readonly band = input<ChartBand | null>(null);
+  readonly heading = input('Temperatures');
+  /** 3 when the chart sits inside a section that already has an h2. */
+  readonly headingLevel = input<2 | 3>(2);
+  /** Unique per chart, so several charts on one page keep their labels apart. */
+  protected readonly uid = `fridge-chart-${++nextChartId}`;
   private readonly api = inject(FridgesApi);
   private readonly auth = inject(AuthStore);
   private readonly colors = chartColors();
@@ -76,7 +100,10 @@ export class FridgeChart {
     const count = data.primary.points.length + data.primary.buckets.length;
     if (!count) return `No readings between ${dayLabel.format(this.range().from)} and ${dayLabel.format(this.range().to)}.`;
     const kind = data.bucketMinutes ? `lowest and highest per ${data.bucketMinutes >= 60 ? `${data.bucketMinutes / 60} h` : `${data.bucketMinutes} min`}` : 'every reading';
-    return `Temperatures in °${this.unit()} from ${dayLabel.format(this.range().from)} to ${dayLabel.format(this.range().to)}, ${kind}; shaded columns are excursions.`;
+    const band = this.band();
+    const bandText = band ? `; the shaded band is the ${band.label.toLowerCase()}` : '';
+    const label = this.range().to.getTime() - this.range().from.getTime() > 2 * 86_400_000 ? dayLabel : timeLabel;
+    return `Temperatures in °${this.unit()} from ${label.format(this.range().from)} to ${label.format(this.range().to)}, ${kind}; shaded columns are excursions${bandText}.`;
   });
 
   protected readonly config = computed<ChartConfiguration<'line'>>(() => {
@@ -84,10 +111,10 @@ export class FridgeChart {
     const unit = this.unit();
     const range = this.range();
     const c = this.colors;
-    const s = data ? chartSeries(data, unit) : { primaryPoints: [], highs: [], lows: [], backup: [], low: 0, high: 0 };
+    const s = data ? chartSeries(data, unit, this.band()) : { primaryPoints: [], highs: [], lows: [], backup: [], low: 0, high: 0 };
     const band = data ? [{ x: range.from.getTime(), y: s.high }, { x: range.to.getTime(), y: s.high }] : [];
     const datasets: ChartConfiguration<'line'>['data']['datasets'] = [
-      { label: 'Allowed range', data: band, borderColor: 'transparent', backgroundColor: c.band, fill: { value: s.low }, pointRadius: 0, order: 3 },
+      { label: this.band()?.label ?? 'Allowed range', data: band, borderColor: 'transparent', backgroundColor: c.band, fill: { value: s.low }, pointRadius: 0, order: 3 },
       ...(s.primaryPoints.length ? [{ label: 'Readings', data: s.primaryPoints, borderColor: c.line, backgroundColor: c.line, borderWidth: 1.5, pointRadius: s.primaryPoints.length < 200 ? 2 : 0, spanGaps: false, order: 1 }] : []),
       ...(s.highs.length
         ? [
@@ -127,8 +154,12 @@ export class FridgeChart {
   constructor() {
     effect(() => {
       const end = this.endAt();
+      const window = this.window();
       untracked(() => {
-        if (end && !this.moved) this.range.set(rangeEnding('week', new Date(Date.parse(end) + 60_000)));
+        if (this.moved) return;
+        this.onWindow.set(!!window);
+        if (window) this.range.set({ span: 'custom', from: new Date(window.from), to: new Date(window.to) });
+        else if (end) this.range.set(rangeEnding('week', new Date(Date.parse(end) + 60_000)));
       });
     });
     // The table's data source is not a signal; keep it fed from the rows.
@@ -142,19 +173,32 @@ export class FridgeChart {
   /** Set once the person picks a range, so later data does not move it under them. */
   private moved = false;
 
-  protected chooseSpan(span: RangeSpan): void {
+  /** The date fields show once the person picks "Range"; a given window is custom too, but in hours, not days. */
+  protected readonly pickingDates = signal(false);
+  /** Whether the given window is what shows (its own toggle, "Around the event"). */
+  protected readonly onWindow = signal(false);
+  protected readonly toggleValue = computed(() => (this.onWindow() ? 'window' : this.range().span));
+
+  protected chooseSpan(span: RangeSpan | 'window'): void {
     this.moved = true;
-    if (span === 'custom') this.range.update((r) => ({ ...r, span }));
+    this.pickingDates.set(span === 'custom');
+    this.onWindow.set(span === 'window');
+    const window = this.window();
+    if (span === 'window') {
+      if (window) this.range.set({ span: 'custom', from: new Date(window.from), to: new Date(window.to) });
+    } else if (span === 'custom') this.range.update((r) => ({ ...r, span }));
     else this.range.update((r) => rangeEnding(span, r.to));
   }
 
   protected move(direction: -1 | 1): void {
     this.moved = true;
+    this.onWindow.set(false);
     this.range.update((r) => shiftRange(r, direction));
   }
 
   protected setCustom(which: 'from' | 'to', value: string): void {
     this.moved = true;
+    this.onWindow.set(false);
     const date = new Date(`${value}T00:00`);
     if (Number.isNaN(date.getTime())) return;
     this.range.update((r) => {

@@ -42,6 +42,11 @@ export class LotDetail {
     this.auth.user();
     return this.auth.hasRole('admin', 'storage');
   });
+  /** The review page's readers (its nav entry's roles) get a way from a waiting hold to the decision. */
+  protected readonly canReview = computed(() => {
+    this.auth.user();
+    return this.auth.hasRole('veterinarian', 'storage', 'admin');
+  });
   protected readonly standingCauses = computed(() => [...new Set((this.lot.value()?.holds ?? []).filter((h) => h.standing).map((h) => h.cause))]);
   protected readonly doses = computed(() => {
     const lot = this.lot.value();

@@ -11,6 +11,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { NotificationsStore } from '../../core/notifications/notifications-store';
 import { DecisionDialog } from './decision-dialog';
 import { RecallDialog } from './recall-dialog';
+import { ReviewEventChart } from './review-event-chart';
 import { TroubleshootingDialog, type TroubleshootingDialogData } from './troubleshooting-dialog';
 import { formatTemperature, TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { ReviewApi, type QueueEvent, type QueueLot } from './review-api';
@@ -26,7 +27,7 @@ const causeLabels: Record<string, string> = {
 
 @Component({
   selector: 'vy-review',
-  imports: [MatCardModule, MatButtonModule, MatIconModule, DatePipe, DecimalPipe, RouterLink, TemperaturePipe],
+  imports: [MatCardModule, MatButtonModule, MatIconModule, DatePipe, DecimalPipe, RouterLink, TemperaturePipe, ReviewEventChart],
   templateUrl: './review.html',
   styleUrl: './review.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

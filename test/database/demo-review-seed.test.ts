@@ -1,0 +1,68 @@
+// The demo scenario, seeded as `npm start` seeds it, leaves the review with work to show: undecided automatic holds
+// from a real log import, one event decided and signed, a troubleshooting record started, unread notifications for
+// the veterinarian and storage staff, and exactly one fridge whose stock count is due.
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { expect } from 'chai';
+import { QueryTypes } from 'sequelize';
+import { PasswordHasher } from '../../api/auth/password-hasher.js';
+import { fridgeCountStates } from '../../api/stock-counts/count-due-service.js';
+import { ExposureEvent, Hold, HoldDecision, Notification, TroubleshootingRecord, User } from '../../database/models/index.js';
+import { seedDemoScenario } from '../../database/seeders/demo-scenario.js';
+import { resetDatabase } from '../support/test-database.js';
+import { testContext } from '../support/test-app.js';
+
+describe('the demo scenario for the review', function () {
+  this.timeout(180_000);
+  let uploads: string;
+  const previousUploads = process.env.UPLOADS_DIR;
+  before(async () => {
+    await resetDatabase();
+    uploads = await mkdtemp(join(tmpdir(), 'vialyard-demo-seed-'));
+    process.env.UPLOADS_DIR = uploads;
+    const hasher = new PasswordHasher(4);
+    expect(await seedDemoScenario(testContext().sequelize, (password) => hasher.hash(password))).to.equal(true);
+  });
+  after(async () => {
+    if (previousUploads === undefined) delete process.env.UPLOADS_DIR;
+    else process.env.UPLOADS_DIR = previousUploads;
+    await rm(uploads, { recursive: true, force: true });
+    await resetDatabase();
+  });
+
+  it('queues undecided exposure-event holds made by the import, and keeps one event decided and signed', async () => {
+    const sequelize = testContext().sequelize;
+    const rows = await sequelize.query<{ event_id: number; holds: number; decided: number }>(
+      `SELECT x.id AS event_id, count(h.id)::int AS holds, count(d.id)::int AS decided
+         FROM exposure_events x JOIN holds h ON h.source_kind = 'exposure_event' AND h.source_id = x.id
+         LEFT JOIN hold_decisions d ON d.hold_id = h.id GROUP BY x.id ORDER BY x.id`,
+      { type: QueryTypes.SELECT },
+    );
+    const undecided = rows.filter((r) => r.decided === 0);
+    const decided = rows.filter((r) => r.decided === r.holds);
+    expect(undecided.length, 'an event waiting for the veterinarian').to.be.at.least(1);
+    expect(undecided.every((r) => r.holds >= 2), 'each holds more than one lot').to.equal(true);
+    expect(decided).to.have.length(1);
+    const signed = await HoldDecision.findAll();
+    expect(signed.every((d) => d.signerName === 'Dr. Imani Castell' && d.signatureMeaning.length > 0)).to.equal(true);
+    expect(signed.map((d) => d.decision).sort()).to.deep.equal(['release', 'release_with_condition']);
+    // The automatic holds came from the import's recompute, not from hand-written rows: no user opened them.
+    const automatic = await Hold.findAll({ where: { sourceKind: 'exposure_event' } });
+    expect(automatic.every((h) => h.openedBy === null && h.cause === 'excursion')).to.equal(true);
+    const open = (await ExposureEvent.findByPk(undecided[0].event_id))!;
+    const record = (await TroubleshootingRecord.findOne({ where: { exposureEventId: open.id } }))!;
+    expect(record.whatHappened, 'started').to.not.equal('');
+    expect(record.preventiveAction, 'not finished').to.equal('');
+  });
+
+  it('leaves unread notifications for the veterinarian and storage, and one fridge due for its count', async () => {
+    for (const email of ['vet@larkmoor.example', 'storage@larkmoor.example']) {
+      const user = (await User.findOne({ where: { email } }))!;
+      expect(await Notification.count({ where: { userId: user.id, readAt: null } }), email).to.be.at.least(2);
+    }
+    const states = await fridgeCountStates(testContext().sequelize, { siteIds: null });
+    const due = states.filter((s) => s.due);
+    expect(due.map((s) => s.fridgeCode)).to.deep.equal(['LKN-F1']);
+  });
+});
