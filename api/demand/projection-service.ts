@@ -6,10 +6,12 @@ import { projectSite } from '../../shared/demand/project-site.js';
 import type { SiteProjection } from '../../shared/demand/projection-types.js';
 import type { SiteProjectionView } from '../../shared/demand/projection-view.js';
 import { transferCandidates, type SpareLot } from '../../shared/demand/transfer-candidates.js';
+import { siteToday } from '../flocks/site-today.js';
 import { AppError } from '../http/app-error.js';
 import { listPurchaseOrders } from '../purchase-orders/purchase-orders-service.js';
 import { nextReference } from './next-reference.js';
 import { withSendings } from './order-sendings.js';
+import { ProjectionCache, projectionDataVersion } from './projection-cache.js';
 import { loadProjectionInput, type LoadedProjection } from './projection-inputs.js';
 import { loadTransferViews } from './transfer-view.js';
 
@@ -54,18 +56,36 @@ function planOrExplain(site: Site, loaded: LoadedProjection): SiteProjection {
   }
 }
 
+/**
+ * Every visible site's view. It depends on the user only through the set of sites they see (each may lend to
+ * another), so it is cached per site set, data version and each site's today.
+ */
+const cachedViews = new ProjectionCache<SiteProjectionView[]>();
+
 /** Projections of `wanted` sites; every site the user sees is planned, since each may lend to another. */
 export async function projectSites(user: Express.User, wanted: number[] | 'all', now = new Date()): Promise<SiteProjectionView[]> {
+  const version = await projectionDataVersion();
   const sites = await Site.findAll({ where: user.allSites ? {} : { id: { [Op.in]: user.siteIds } }, order: [['name', 'ASC']] });
+  const key = sites.map((site) => `${site.id}:${siteToday(site, now)}`).join(',');
+  const all = version === null ? await viewsOfSites(user, sites, now) : await cachedViews.get(version, key, () => viewsOfSites(user, sites, now));
+  // 'all' hands back the cached array itself, so what is derived from it can be kept beside it (see cachedJson).
+  return wanted === 'all' ? all : all.filter((view) => wanted.includes(view.siteId));
+}
+
+/** Forgets every cached body (tests that compare a cold computation with a cached one). */
+export function clearProjectionCache(): void {
+  cachedViews.clear();
+}
+
+async function viewsOfSites(user: Express.User, sites: Site[], now: Date): Promise<SiteProjectionView[]> {
   const projected = new Map<number, Projected>();
   for (const site of sites) {
     const loaded = await loadProjectionInput(site.id, now);
     projected.set(site.id, { loaded, projection: planOrExplain(site, loaded) });
   }
   const spare = new Map(sites.map((site) => [site.id, spareLots(site, projected.get(site.id)!)]));
-  const chosen = sites.filter((site) => wanted === 'all' || wanted.includes(site.id));
   const views: SiteProjectionView[] = [];
-  for (const site of chosen) {
+  for (const site of sites) {
     const own = projected.get(site.id)!;
     const othersSpare = sites.filter((other) => other.id !== site.id).flatMap((other) => spare.get(other.id)!);
     const borrowing = own.projection.products
