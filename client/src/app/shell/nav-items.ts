@@ -21,7 +21,7 @@ export const navItems: NavItem[] = [
   { label: 'Purchasing', icon: 'event_upcoming', link: '/purchasing', roles: ['admin', 'purchasing', 'veterinarian'] },
   { label: 'Flocks', icon: 'egg', link: '/flocks', roles: ['admin', 'purchasing', 'veterinarian', 'crew'] },
   { label: 'Programmes', icon: 'vaccines', link: '/programmes', roles: ['admin', 'purchasing', 'veterinarian', 'crew'] },
-  { label: 'Review', icon: 'fact_check', link: '/review', roles: ['veterinarian', 'storage', 'admin'] },
+  { label: 'Review', icon: 'rule', link: '/review', roles: ['veterinarian', 'storage', 'admin'] },
   { label: 'Day sheet', icon: 'event_available', link: '/vaccination-day', roles: ['crew', 'admin', 'veterinarian'] },
   { label: 'My account', icon: 'manage_accounts', link: '/account' },
 ];

@@ -13,6 +13,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { SitesApi } from '../../core/sites/sites-api';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { FridgeDialog, type FridgeDialogData } from './fridge-dialog';
+import { LotsApi } from '../../shared/lots/lots-api';
 import { FridgesApi } from './fridges-api';
 
 @Component({
@@ -27,6 +28,9 @@ export class Fridges {
   private readonly dialog = inject(MatDialog);
   private readonly auth = inject(AuthStore);
   private readonly sites = toSignal(inject(SitesApi).list(), { initialValue: [] });
+  /** Fridges whose stock count is due (monthly, and after each delivery), as on the storage home card. */
+  private readonly countsDue = toSignal(inject(LotsApi).countsDue(), { initialValue: [] });
+  private readonly countDueIds = computed(() => new Set(this.countsDue().map((c) => c.fridgeId)));
 
   protected readonly fridges = rxResource({ stream: () => this.api.list() });
   protected readonly rows = computed(() => this.fridges.value() ?? []);
@@ -42,6 +46,7 @@ export class Fridges {
       ...(f.checksToday < f.checksNeeded ? [{ text: `Checked ${f.checksToday} of ${f.checksNeeded} today`, tone: 'warn' as const }] : []),
       ...(f.openExcursions ? [{ text: `${f.openExcursions} open excursion${f.openExcursions === 1 ? '' : 's'}`, tone: 'hold' as const }] : []),
       ...(f.calibrationsDue ? [{ text: 'Calibration due', tone: 'warn' as const }] : []),
+      ...(this.countDueIds().has(f.id) ? [{ text: 'Stock count due', tone: 'warn' as const }] : []),
     ];
   }
 
