@@ -22,6 +22,8 @@ async function rowCounts(connection: Sequelize): Promise<Record<string, number>>
 }
 
 describe('backup and restore', function () {
+  // Registers the models first, so the file also runs alone or first.
+  before(() => void testContext());
   this.timeout(60_000);
   const restoredName = 'vialyard_restore_check';
   let cluster: LocalCluster;

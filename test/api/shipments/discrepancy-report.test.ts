@@ -8,7 +8,7 @@ import sharp from 'sharp';
 import { Shipment } from '../../../database/models/index.js';
 import { resetDatabase } from '../../support/test-database.js';
 import { caughtMail, clearCaughtMail } from '../../support/mail-catcher.js';
-import { createSite, createTestUser, signInAs } from '../../support/test-app.js';
+import { createSite, createTestUser, signInAs, testContext } from '../../support/test-app.js';
 import { createCatalogue, createFridge, createPurchaseOrder, lineInput, makeJpeg, postShipment, shipmentInput } from '../../support/receiving-fixtures.js';
 import { clearPhotoFiles } from '../../support/receiving-state.js';
 
@@ -27,6 +27,8 @@ async function firstPage(pdf: Buffer): Promise<Buffer> {
 }
 
 describe('the discrepancy report', () => {
+  // Registers the models first, so the file also runs alone or first.
+  before(() => void testContext());
   beforeEach(async () => {
     await resetDatabase();
     clearCaughtMail();

@@ -1,11 +1,13 @@
 // Bad input at receiving always gets a clear 4xx naming the field or the file, and never leaves a row or a file behind.
 import { expect } from 'chai';
 import { resetDatabase } from '../../support/test-database.js';
-import { createSite, signInAs } from '../../support/test-app.js';
+import { createSite, signInAs, testContext } from '../../support/test-app.js';
 import { createCatalogue, createFridge, lineInput, makeJpeg, pngClaiming, postShipment, shipmentInput } from '../../support/receiving-fixtures.js';
 import { clearPhotoFiles, receivingCounts, type ReceivingCounts } from '../../support/receiving-state.js';
 
 describe('receiving refuses bad input and stores nothing', () => {
+  // Registers the models first, so the file also runs alone or first.
+  before(() => void testContext());
   let setup: Awaited<ReturnType<typeof setUp>>;
   let empty: ReceivingCounts;
 

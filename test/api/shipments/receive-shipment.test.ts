@@ -4,11 +4,13 @@ import sharp from 'sharp';
 import { AuditEntry, Hold, Lot, PurchaseOrder, Shipment, StockMovement } from '../../../database/models/index.js';
 import { resetDatabase } from '../../support/test-database.js';
 import { clearCaughtMail } from '../../support/mail-catcher.js';
-import { createSite, signInAs } from '../../support/test-app.js';
+import { createSite, signInAs, testContext } from '../../support/test-app.js';
 import { createCatalogue, createFridge, createPurchaseOrder, lineInput, makeJpeg, postShipment, shipmentInput } from '../../support/receiving-fixtures.js';
 import { balanceOf, clearPhotoFiles, movementSum, receivingCounts } from '../../support/receiving-state.js';
 
 describe('receiving a shipment', () => {
+  // Registers the models first, so the file also runs alone or first.
+  before(() => void testContext());
   beforeEach(async () => {
     await resetDatabase();
     clearCaughtMail();
