@@ -71,6 +71,8 @@ describe('the client shell in Chromium', () => {
     await dialog.getByRole('checkbox', { name: 'Vaccination crew' }).check();
     await dialog.getByLabel('Password').fill('too short');
     await dialog.getByRole('button', { name: 'Create user' }).click();
+    // The error comes back from the server: wait for it rather than read the dialog at once.
+    await dialog.locator('mat-error').first().waitFor();
     expect(await dialog.locator('mat-error').allInnerTexts()).to.deep.equal(['Use at least 15 characters (this one has 9).']);
     await expectAccessible(page, 'user dialog');
     await page.screenshot({ path: screenshotPath('users-dialog') });
