@@ -40,7 +40,14 @@ export interface AxeViolation {
 /** Runs axe-core's WCAG 2.2 AA rules on the page and returns the serious and critical violations. */
 export async function seriousAccessibilityViolations(page: Page): Promise<AxeViolation[]> {
   // A colour measured mid-fade fails contrast: let running animations finish first.
-  await page.evaluate(() => Promise.all(document.getAnimations().map((animation) => animation.finished.catch(() => undefined))));
+  // An element shown a moment ago may start its fade on a later frame: wait a few frames, then for every animation.
+  await page.evaluate(async () => {
+    // No named functions in here: the test transpiler would wrap them in a helper the page does not have.
+    for (let round = 0; round < 3; round++) {
+      for (let frames = 0; frames < 2; frames++) await new Promise((resolve) => requestAnimationFrame(() => resolve(undefined)));
+      await Promise.all(document.getAnimations().map((animation) => animation.finished.catch(() => undefined)));
+    }
+  });
   await page.addScriptTag({ path: axePath });
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run(context: Document, options: object): Promise<{ violations: unknown[] }> } }).axe;
