@@ -2,6 +2,7 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { Site, User, UserSite } from '../../database/models/index.js';
 import type { CrewAssignmentInput } from '../../shared/vaccination-day/day-schemas.js';
+import type { DayLead } from '../../shared/vaccination-day/day-views.js';
 import type { AppContext } from '../app-context.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { siteToday } from '../flocks/site-today.js';
@@ -90,14 +91,14 @@ export async function siteCrew(context: AppContext, actor: Express.User, siteId:
 }
 
 /** The crew leads assigned on a day on the sites the viewer sees, for a planner choosing whose day sheet to read. */
-export async function dayLeads(context: AppContext, viewer: Express.User, day: string): Promise<{ id: number; name: string; siteNames: string[] }[]> {
+export async function dayLeads(context: AppContext, viewer: Express.User, day: string): Promise<DayLead[]> {
   const rows = await context.sequelize.query<{ lead_id: number; lead_name: string; site_id: number; site_name: string }>(
     `SELECT a.lead_id, u.name AS lead_name, s.id AS site_id, s.name AS site_name FROM crew_assignments a
        JOIN users u ON u.id = a.lead_id JOIN sites s ON s.id = a.site_id
      WHERE a.day = :day ORDER BY u.name, u.id, s.name`,
     { replacements: { day }, type: QueryTypes.SELECT },
   );
-  const leads = new Map<number, { id: number; name: string; siteNames: string[] }>();
+  const leads = new Map<number, DayLead>();
   for (const row of rows.filter((r) => canSeeSite(viewer, r.site_id))) {
     const lead = leads.get(row.lead_id) ?? { id: row.lead_id, name: row.lead_name, siteNames: [] };
     lead.siteNames.push(row.site_name);

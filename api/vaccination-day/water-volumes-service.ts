@@ -2,22 +2,10 @@
 import { QueryTypes } from 'sequelize';
 import { Product } from '../../database/models/index.js';
 import type { WaterVolumeInput } from '../../shared/vaccination-day/day-schemas.js';
+import type { WaterVolumeView } from '../../shared/vaccination-day/day-views.js';
 import type { AppContext } from '../app-context.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { AppError } from '../http/app-error.js';
-
-export interface WaterVolumeView {
-  id: number;
-  productId: number;
-  productName: string;
-  ageFromDays: number;
-  ageToDays: number;
-  mlPer1000Birds: number;
-  source: 'label' | 'veterinarian';
-  note: string;
-  enteredBy: string;
-  enteredAt: string;
-}
 
 export async function listWaterVolumes(context: AppContext, productId?: number): Promise<WaterVolumeView[]> {
   const rows = await context.sequelize.query<Record<string, unknown>>(

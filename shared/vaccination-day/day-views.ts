@@ -104,3 +104,24 @@ export interface DaySheet {
   leadName: string;
   entries: DaySheetEntry[];
 }
+
+/** An entered water volume for the mix, as the API lists it. */
+export interface WaterVolumeView {
+  id: number;
+  productId: number;
+  productName: string;
+  ageFromDays: number;
+  ageToDays: number;
+  mlPer1000Birds: number;
+  source: 'label' | 'veterinarian';
+  note: string;
+  enteredBy: string;
+  enteredAt: string;
+}
+
+/** A crew lead on a day, for a planner choosing whose sheet to read. */
+export interface DayLead {
+  id: number;
+  name: string;
+  siteNames: string[];
+}

@@ -28,7 +28,3 @@ export const attestations: Partial<Record<ReadinessKind, Record<string, string>>
   battery: { charged: 'Battery fully charged' },
   enough_vaccine: { equipmentAssembled: 'Equipment assembled and enough vaccine to finish without a break' },
 };
-
-export function isMemberCheck(kind: ReadinessKind): kind is MemberCheckKind {
-  return (memberCheckKinds as readonly string[]).includes(kind);
-}

@@ -25,7 +25,7 @@ export interface DiscardDialogData {
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>
       <mat-dialog-content class="content">
         @if (formError(); as error) {
-          <p class="form-error" role="alert">{{ error }}</p>
+          <p class="vy-form-error" role="alert">{{ error }}</p>
         }
         @if (held) {
           <p class="advice">This lot is on hold: the veterinarian decides whether it is discarded. Only vials that are physically damaged may be discarded here.</p>
@@ -50,7 +50,7 @@ export interface DiscardDialogData {
           }
         </mat-radio-group>
         @if (form.controls.reason.invalid && form.controls.reason.touched) {
-          <p class="form-error" role="alert">{{ message(form.controls.reason, { required: 'Choose a reason.' }) }}</p>
+          <p class="vy-form-error" role="alert">{{ message(form.controls.reason, { required: 'Choose a reason.' }) }}</p>
         }
         <mat-form-field>
           <mat-label>{{ form.controls.reason.value === 'other' ? 'Why' : 'Details (optional)' }}</mat-label>
@@ -70,7 +70,6 @@ export interface DiscardDialogData {
     .reasons { display: flex; flex-direction: column; margin: 4px 0 12px; }
     .hint { margin: 0; color: var(--mat-sys-on-surface-variant); font: var(--mat-sys-body-small); }
     .advice { margin: 0 0 8px; padding: 8px 12px; border-radius: 8px; background: var(--vy-warn-container); color: var(--vy-on-warn-container); }
-    .form-error { color: var(--mat-sys-on-error-container); background: var(--mat-sys-error-container); padding: 8px 12px; border-radius: 8px; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

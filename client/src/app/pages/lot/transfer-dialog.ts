@@ -32,7 +32,7 @@ export interface TransferDialogData {
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>
       <mat-dialog-content class="content">
         @if (formError(); as error) {
-          <p class="form-error" role="alert">{{ error }}</p>
+          <p class="vy-form-error" role="alert">{{ error }}</p>
         }
         <mat-form-field>
           <mat-label>From fridge</mat-label>
@@ -89,7 +89,6 @@ export interface TransferDialogData {
     .planned { margin: 0 24px; font: var(--mat-sys-body-medium); }
     .hint { margin: 0 0 8px; color: var(--mat-sys-on-surface-variant); font: var(--mat-sys-body-small); }
     .advice { margin: 0; padding: 8px 12px; border-radius: 8px; background: var(--vy-warn-container); color: var(--vy-on-warn-container); }
-    .form-error { color: var(--mat-sys-on-error-container); background: var(--mat-sys-error-container); padding: 8px 12px; border-radius: 8px; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -18,7 +18,7 @@ import { ReviewApi, type QueueLot } from './review-api';
   imports: [DecimalPipe, ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatRadioModule, MatButtonModule],
   templateUrl: './decision-dialog.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  styles: `.content { display: flex; flex-direction: column; gap: 12px; } .meaning { font-style: italic; } .form-error { color: var(--mat-sys-on-error-container); background: var(--mat-sys-error-container); padding: 8px 12px; border-radius: 8px; }`,
+  styles: `.content { display: flex; flex-direction: column; gap: 12px; } .meaning { font-style: italic; }`,
 })
 export class DecisionDialog {
   protected readonly lot = inject<QueueLot>(MAT_DIALOG_DATA);

@@ -21,7 +21,7 @@ import { ReviewApi } from './review-api';
       <mat-dialog-content class="content">
         <p>Every lot with this number (of the product you pick, or of any product), on every site and whatever its letter case, is held "do not use" until you decide it.</p>
         @if (formError(); as error) {
-          <p class="form-error" role="alert">{{ error }}</p>
+          <p class="vy-form-error" role="alert">{{ error }}</p>
         }
         <mat-form-field>
           <mat-label>Lot number</mat-label>
@@ -51,7 +51,7 @@ import { ReviewApi } from './review-api';
       </mat-dialog-actions>
     </form>
   `,
-  styles: `.content { display: flex; flex-direction: column; gap: 8px; } .form-error { color: var(--mat-sys-on-error-container); background: var(--mat-sys-error-container); padding: 8px 12px; border-radius: 8px; }`,
+  styles: `.content { display: flex; flex-direction: column; gap: 8px; }`,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class RecallDialog {

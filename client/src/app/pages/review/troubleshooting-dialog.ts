@@ -37,8 +37,7 @@ const toNumber = (value: string | number | null) => (value === null || String(va
   imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatRadioModule, MatButtonModule],
   templateUrl: './troubleshooting-dialog.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  styles: `.content { display: grid; grid-template-columns: repeat(auto-fill, minmax(200px, 1fr)); gap: 4px 12px; } .wide { grid-column: 1 / -1; }
-    .form-error { color: var(--mat-sys-on-error-container); background: var(--mat-sys-error-container); padding: 8px 12px; border-radius: 8px; }`,
+  styles: `.content { display: grid; grid-template-columns: repeat(auto-fill, minmax(200px, 1fr)); gap: 4px 12px; } .wide { grid-column: 1 / -1; }`,
 })
 export class TroubleshootingDialog {
   protected readonly data = inject<TroubleshootingDialogData>(MAT_DIALOG_DATA);

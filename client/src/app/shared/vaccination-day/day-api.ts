@@ -2,30 +2,11 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { map, type Observable } from 'rxjs';
-import type { DaySheet, RunView } from '@shared/vaccination-day/day-views.js';
+import type { DayLead, DaySheet, RunView, WaterVolumeView } from '@shared/vaccination-day/day-views.js';
 import { handlesOwnErrors } from '../../core/http/error-interceptor';
 
-export type { DaySheet, DaySheetEntry, RunView, CheckView, LotOut, LotToTake } from '@shared/vaccination-day/day-views.js';
-
-export interface DayLead {
-  id: number;
-  name: string;
-  siteNames: string[];
-}
-
-/** An entered water volume as the API lists it (shape of api/vaccination-day/water-volumes-service.ts). */
-export interface WaterVolume {
-  id: number;
-  productId: number;
-  productName: string;
-  ageFromDays: number;
-  ageToDays: number;
-  mlPer1000Birds: number;
-  source: 'label' | 'veterinarian';
-  note: string;
-  enteredBy: string;
-  enteredAt: string;
-}
+export type { DayLead, DaySheet, DaySheetEntry, RunView, CheckView, LotOut, LotToTake } from '@shared/vaccination-day/day-views.js';
+export type { WaterVolumeView as WaterVolume } from '@shared/vaccination-day/day-views.js';
 
 export interface SiteCrew {
   day: string;
@@ -48,9 +29,9 @@ export class DayApi {
     return this.http.get<{ items: DayLead[] }>(`${this.base}/leads`, { params: { day } }).pipe(map((body) => body.items));
   }
 
-  waterVolumes(productId?: number): Observable<WaterVolume[]> {
+  waterVolumes(productId?: number): Observable<WaterVolumeView[]> {
     const params: Record<string, number> = productId ? { productId } : {};
-    return this.http.get<{ items: WaterVolume[] }>(`${this.base}/water-volumes`, { params }).pipe(map((body) => body.items));
+    return this.http.get<{ items: WaterVolumeView[] }>(`${this.base}/water-volumes`, { params }).pipe(map((body) => body.items));
   }
 
   historyUrl(flockId: number, format: 'csv' | 'pdf'): string {
