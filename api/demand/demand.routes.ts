@@ -2,13 +2,13 @@
 import { plannedTransferInputSchema, productStockSettingsSchema, safetyProposalRequestSchema } from '../../shared/demand/demand-schemas.js';
 import { purchaseOrderInputSchema } from '../../shared/receiving/purchase-order-schemas.js';
 import type { AppContext } from '../app-context.js';
+import { sendCachedJson } from '../cache/versioned-cache.js';
 import { createSecureRouter } from '../http/secure-router.js';
 import { parseIdParam } from '../http/params.js';
 import { parseInput } from '../http/validate.js';
 import { siteOfPurchaseOrder } from '../purchase-orders/purchase-orders-service.js';
 import { createAndSendOrder, renderPurchaseOrderPdf, sendPurchaseOrder } from './order-sending-service.js';
 import { purchasingOverview } from './overview-service.js';
-import { cachedJson } from './projection-cache.js';
 import { projectSites } from './projection-service.js';
 import { proposeSafetyStockFor } from './safety-proposal-service.js';
 import { saveStockSettings } from './stock-settings-service.js';
@@ -28,12 +28,12 @@ export function demandRoutes(context: AppContext) {
   const productId = (req: Params) => parseIdParam(req.params.productId);
 
   router.get('/overview', { roles: buyers }, async (req, res) => {
-    res.type('application/json').send(cachedJson(await purchasingOverview(req.user!)));
+    sendCachedJson(res, await purchasingOverview(req.user!));
   });
 
   router.get('/sites/:siteId/projection', { roles: planners, siteOf: siteOfParam }, async (req, res) => {
     const [view] = await projectSites(req.user!, [siteId(req)]);
-    res.type('application/json').send(cachedJson(view));
+    sendCachedJson(res, view);
   });
 
   router.put('/sites/:siteId/products/:productId/settings', { roles: buyers, siteOf: siteOfParam }, async (req, res) => {

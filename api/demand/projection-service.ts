@@ -6,12 +6,13 @@ import { projectSite } from '../../shared/demand/project-site.js';
 import type { SiteProjection } from '../../shared/demand/projection-types.js';
 import type { SiteProjectionView } from '../../shared/demand/projection-view.js';
 import { transferCandidates, type SpareLot } from '../../shared/demand/transfer-candidates.js';
+import { dataVersion } from '../cache/data-versions.js';
+import { VersionedCache } from '../cache/versioned-cache.js';
 import { siteToday } from '../flocks/site-today.js';
 import { AppError } from '../http/app-error.js';
 import { listPurchaseOrders } from '../purchase-orders/purchase-orders-service.js';
 import { nextReference } from './next-reference.js';
 import { withSendings } from './order-sendings.js';
-import { ProjectionCache, projectionDataVersion } from './projection-cache.js';
 import { loadProjectionInput, type LoadedProjection } from './projection-inputs.js';
 import { loadTransferViews } from './transfer-view.js';
 
@@ -60,11 +61,11 @@ function planOrExplain(site: Site, loaded: LoadedProjection): SiteProjection {
  * Every visible site's view. It depends on the user only through the set of sites they see (each may lend to
  * another), so it is cached per site set, data version and each site's today.
  */
-const cachedViews = new ProjectionCache<SiteProjectionView[]>();
+const cachedViews = new VersionedCache<SiteProjectionView[]>();
 
 /** Projections of `wanted` sites; every site the user sees is planned, since each may lend to another. */
 export async function projectSites(user: Express.User, wanted: number[] | 'all', now = new Date()): Promise<SiteProjectionView[]> {
-  const version = await projectionDataVersion();
+  const version = await dataVersion('projection');
   const sites = await Site.findAll({ where: user.allSites ? {} : { id: { [Op.in]: user.siteIds } }, order: [['name', 'ASC']] });
   const key = sites.map((site) => `${site.id}:${siteToday(site, now)}`).join(',');
   const all = version === null ? await viewsOfSites(user, sites, now) : await cachedViews.get(version, key, () => viewsOfSites(user, sites, now));

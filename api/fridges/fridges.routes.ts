@@ -2,6 +2,8 @@
 import { z } from 'zod';
 import { fridgeInputSchema } from '../../shared/fridges/fridge-schemas.js';
 import type { AppContext } from '../app-context.js';
+import { currentMinute, dataVersion } from '../cache/data-versions.js';
+import { sendCachedJson, VersionedCache } from '../cache/versioned-cache.js';
 import { createSecureRouter } from '../http/secure-router.js';
 import { parseInput } from '../http/validate.js';
 import { fridgeReaders, fridgeWriters, fromBody, fromParam, idFrom, siteOfFridge, siteOfSite } from './fridge-access.js';
@@ -9,7 +11,7 @@ import { createFridge, getFridge, listFridges, updateFridge, visibleSiteIds } fr
 import { monthlyRecord } from './monthly-record.js';
 import { monthlyRecordCsv } from './monthly-record-csv.js';
 import { monthlyRecordPdf } from './monthly-record-pdf.js';
-import { storageOverview } from './storage-overview.js';
+import { storageOverview, type StorageOverview } from './storage-overview.js';
 
 const listQuerySchema = z.object({ siteId: z.coerce.number().int().positive().optional() });
 const recordQuerySchema = z.object({
@@ -17,6 +19,12 @@ const recordQuerySchema = z.object({
   month: z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, 'A month as YYYY-MM.').optional(),
   format: z.enum(['pdf', 'csv']).default('pdf'),
 });
+
+/**
+ * Storage homes per site set, kept for the minute (what they say about "now" — today's checks, no recent data, calibrations
+ * due — moves by the minute at most) and until a write to what they read advances the storage data version.
+ */
+const overviews = new VersionedCache<StorageOverview>();
 
 export function fridgesRoutes(context: AppContext) {
   const router = createSecureRouter('/api/fridges');
@@ -28,7 +36,10 @@ export function fridgesRoutes(context: AppContext) {
   });
 
   router.get('/overview', fridgeReaders, async (req, res) => {
-    res.json(await storageOverview(context.sequelize, visibleSiteIds(req.user!)));
+    const siteIds = visibleSiteIds(req.user!);
+    const compute = () => storageOverview(context.sequelize, siteIds);
+    const version = await dataVersion('storage');
+    sendCachedJson(res, version === null ? await compute() : await overviews.get(version, `${siteIds?.join(',') ?? 'all'}|${currentMinute()}`, compute));
   });
 
   router.post('/', { ...fridgeWriters, siteOf: siteOfSite(fromBody('siteId')) }, async (req, res) => {

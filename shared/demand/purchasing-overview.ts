@@ -2,6 +2,12 @@
 import type { BelowSafetyAlert, ExpireUnusedAlert, ExpiringAlert, ReorderSuggestion, UncoveredAlert } from './projection-types.js';
 import type { SentOrderView } from './sent-order-view.js';
 
+/**
+ * Each list holds its most urgent few: a company of many sites has thousands of uncovered vaccinations, the home card
+ * shows a handful and each site's purchasing page has the rest. The totals count every item.
+ */
+export const OVERVIEW_LIST_LIMIT = 20;
+
 export interface AtSite {
   siteId: number;
   siteName: string;
@@ -14,4 +20,14 @@ export interface PurchasingOverview {
   expireUnused: (ExpireUnusedAlert & AtSite)[];
   belowSafety: (BelowSafetyAlert & AtSite)[];
   openOrders: SentOrderView[];
+  totals: {
+    shortfalls: number;
+    ordersToPlace: number;
+    expiring: number;
+    expireUnused: number;
+    /** Lots that expire soon or before use, each lot once though it may be in both lists. */
+    expiringLots: number;
+    belowSafety: number;
+    openOrders: number;
+  };
 }

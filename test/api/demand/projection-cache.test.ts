@@ -7,22 +7,7 @@ import { resetDatabase } from '../../support/test-database.js';
 import { createSite, signInAs, testContext } from '../../support/test-app.js';
 import { createFlock, createHouse, createPresentation, createProduct, createSiteFridge, createSupplier, createVaccination, siteDay, stockLot } from '../../support/flock-fixtures.js';
 import { createPurchaseOrder } from '../../support/receiving-fixtures.js';
-
-/** Counts the SQL statements the models send while `run` runs. */
-async function countQueries<T>(run: () => Promise<T>): Promise<{ result: T; queries: number }> {
-  const sequelize = Site.sequelize!;
-  const original = sequelize.query.bind(sequelize);
-  let queries = 0;
-  sequelize.query = ((...args: Parameters<typeof original>) => {
-    queries++;
-    return original(...args);
-  }) as typeof sequelize.query;
-  try {
-    return { result: await run(), queries };
-  } finally {
-    sequelize.query = original;
-  }
-}
+import { countQueries } from '../../support/count-queries.js';
 
 describe('the projection cache', () => {
   before(() => void testContext());

@@ -14,8 +14,13 @@ export const spanLabels: Record<RangeSpan, string> = { day: 'Day', week: 'Week',
 
 const spanMs = (span: Exclude<RangeSpan, 'custom'>) => ({ day: DAY_MS, week: 7 * DAY_MS, month: 30 * DAY_MS, year: 365 * DAY_MS })[span];
 
+/**
+ * The span ending at `to`, rounded up to the whole minute: people opening the same fridge within a minute ask for the
+ * same range, which the server then serves from its cache (no reading lies in the future, so nothing changes).
+ */
 export function rangeEnding(span: Exclude<RangeSpan, 'custom'>, to: Date): ChartRange {
-  return { span, from: new Date(to.getTime() - spanMs(span)), to };
+  const end = new Date(Math.ceil(to.getTime() / 60_000) * 60_000);
+  return { span, from: new Date(end.getTime() - spanMs(span)), to: end };
 }
 
 /** Moves a range back (−1) or forward (+1) by its own length. */

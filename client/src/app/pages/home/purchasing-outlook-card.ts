@@ -10,7 +10,7 @@ import { EMPTY } from 'rxjs';
 import { AuthStore } from '../../core/auth/auth-store';
 import { DemandApi } from '../../shared/flocks/demand-api';
 
-/** Each list shows its most urgent few; the purchasing page has the rest. */
+/** Each list shows its most urgent few (the overview sends a few more, and counts them all); the purchasing page has the rest. */
 const SHOWN = 4;
 
 @Component({
@@ -42,6 +42,6 @@ export class PurchasingOutlookCard {
   protected readonly openOrders = computed(() => (this.overview()?.openOrders ?? []).slice(0, SHOWN));
   protected readonly counts = computed(() => {
     const o = this.overview();
-    return o ? { short: o.shortfalls.length, place: o.ordersToPlace.length, expiring: this.allExpiring().length, open: o.openOrders.length } : null;
+    return o ? { short: o.totals.shortfalls, place: o.totals.ordersToPlace, expiring: o.totals.expiringLots, open: o.totals.openOrders } : null;
   });
 }
