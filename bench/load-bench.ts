@@ -15,6 +15,9 @@ export interface LoadResult {
   p99Ms: number;
   non2xx: number;
   errors: number;
+  /** The route's first request, before the load (a cold cache where the route has one). */
+  firstMs?: number;
+  bytes?: number;
 }
 
 export async function runLoad(baseUrl: string, target: LoadTarget, connections: number, seconds: number): Promise<LoadResult> {
