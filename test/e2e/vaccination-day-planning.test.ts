@@ -1,4 +1,4 @@
-// In Chromium: a veterinarian reads a crew lead's day sheet and enters a water volume; an admin sets a site's heat limit;
+// In Chromium: a veterinarian reads a crew lead's day sheet and enters a water volume; an admin sets a site's heat limit on the sites page;
 // the flock page links its vaccination history.
 import { expect } from 'chai';
 import type { Page } from 'playwright-core';
@@ -79,25 +79,25 @@ describe('vaccination-day planning in Chromium', () => {
     await User.update({ displayUnit: 'C' }, { where: { id: admin.id } });
     const page = await signInPage(suite, 'admin@test.example', day.site.timeZone);
 
-    await page.goto(`${suite.server.url}/users`);
+    await page.goto(`${suite.server.url}/sites`);
     const siteRow = page.getByRole('row', { name: /Site HILL/ });
-    await expect(await siteRow.textContent()).to.include('None set');
-    await page.getByRole('button', { name: 'Settings of Site HILL' }).click();
+    await expect(await siteRow.textContent()).to.include('No heat limit set');
+    await page.getByRole('button', { name: 'Edit Site HILL' }).click();
     const dialog = page.getByRole('dialog');
     await dialog.getByLabel('Spray heat limit (°C)').fill('80');
-    await dialog.getByRole('button', { name: 'Save settings' }).click();
+    await dialog.getByRole('button', { name: 'Save changes' }).click();
     // 32–130 °F is 0–54.4 °C (hand-computed), so 80 °C is refused beside the field.
-    await dialog.getByText('Between 0 and 54.4 °C.').waitFor();
+    await dialog.locator('mat-error').filter({ hasText: 'Between 0 and 54.4 °C.' }).waitFor();
     await expectAccessible(page, 'site settings dialog');
     await page.screenshot({ path: screenshotPath('site-settings-dialog') });
     await dialog.getByLabel('Spray heat limit (°C)').fill('30');
-    await dialog.getByRole('button', { name: 'Save settings' }).click();
+    await dialog.getByRole('button', { name: 'Save changes' }).click();
     await dialog.waitFor({ state: 'detached' });
     // Hand-computed: 30 °C = 86 °F, stored in °F and shown back in the admin's unit.
-    await page.getByRole('row', { name: /Site HILL/ }).getByText('30 °C').waitFor();
+    await page.getByRole('row', { name: /Site HILL/ }).getByText('Heat limit 30 °C').waitFor();
     const saved = (await Site.findByPk(day.site.id))!.settings as { sprayHeatLimitF: number };
     expect(saved.sprayHeatLimitF).to.equal(86);
-    await expectAccessible(page, 'users and sites');
+    await expectAccessible(page, 'sites page');
 
     await page.goto(`${suite.server.url}/flocks/${day.vaccination.flockId}`);
     const csv = page.getByRole('link', { name: /CSV/ });

@@ -22,6 +22,12 @@ export const routes: Routes = [
         loadComponent: () => import('./pages/users'),
       },
       {
+        path: 'sites',
+        canActivate: [roleGuard('admin')],
+        title: 'Sites · Vialyard',
+        loadComponent: () => import('./pages/sites'),
+      },
+      {
         path: 'outbox',
         canActivate: [roleGuard('admin')],
         title: 'Outbox · Vialyard',

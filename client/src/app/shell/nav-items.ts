@@ -11,6 +11,7 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { label: 'Home', icon: 'home', link: '/' },
   { label: 'Users', icon: 'group', link: '/users', roles: ['admin'] },
+  { label: 'Sites', icon: 'agriculture', link: '/sites', roles: ['admin'] },
   { label: 'Outbox', icon: 'outgoing_mail', link: '/outbox', roles: ['admin'] },
   { label: 'Receiving', icon: 'local_shipping', link: '/receiving', roles: ['admin', 'receiving', 'storage', 'purchasing', 'veterinarian'] },
   { label: 'Purchase orders', icon: 'receipt_long', link: '/purchase-orders', roles: ['admin', 'purchasing', 'receiving', 'veterinarian'] },

@@ -1,15 +1,18 @@
 // Home card: the sites the user belongs to, with each site's local time (sites may lie in different zones).
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatIconModule } from '@angular/material/icon';
 import { MatListModule } from '@angular/material/list';
+import { RouterLink } from '@angular/router';
 import { map } from 'rxjs';
+import { AuthStore } from '../../core/auth/auth-store';
 import { SitesApi } from '../../core/sites/sites-api';
 
 @Component({
   selector: 'vy-sites-card',
-  imports: [MatCardModule, MatListModule, MatIconModule],
+  imports: [MatCardModule, MatListModule, MatIconModule, MatButtonModule, RouterLink],
   template: `
     <mat-card appearance="outlined">
       <mat-card-header>
@@ -34,12 +37,18 @@ import { SitesApi } from '../../core/sites/sites-api';
           <p>Loading…</p>
         }
       </mat-card-content>
+      @if (isAdmin) {
+        <mat-card-actions>
+          <a mat-button routerLink="/sites">Site settings</a>
+        </mat-card-actions>
+      }
     </mat-card>
   `,
   styles: `h2 { margin: 0; font: var(--mat-sys-title-medium); }`,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SitesCard {
+  protected readonly isAdmin = inject(AuthStore).hasRole('admin');
   protected readonly sites = toSignal(
     inject(SitesApi)
       .list()

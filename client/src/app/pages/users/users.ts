@@ -1,4 +1,4 @@
-// Users administration: a sortable, filterable, paged table and a dialog to create or edit a user; the sites and their settings.
+// Users administration: a sortable, filterable, paged table and a dialog to create or edit a user (site settings live on the sites page).
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -12,17 +12,14 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
 import { roleLabels, type Role } from '@shared/auth/roles.js';
-import type { SiteView } from '@shared/sites/site-schemas.js';
 import type { UserSummary } from '@shared/users/user-schemas.js';
 import { SitesApi } from '../../core/sites/sites-api';
-import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
-import { SiteDialog } from './site-dialog';
 import { UserDialog, type UserDialogData } from './user-dialog';
 import { UsersApi, type UserPageQuery } from './users-api';
 
 @Component({
   selector: 'vy-users',
-  imports: [MatTableModule, MatSortModule, MatPaginatorModule, MatFormFieldModule, MatInputModule, MatButtonModule, MatIconModule, MatChipsModule, MatProgressBarModule, TemperaturePipe],
+  imports: [MatTableModule, MatSortModule, MatPaginatorModule, MatFormFieldModule, MatInputModule, MatButtonModule, MatIconModule, MatChipsModule, MatProgressBarModule],
   templateUrl: './users.html',
   styleUrl: './users.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -30,9 +27,7 @@ import { UsersApi, type UserPageQuery } from './users-api';
 export class Users {
   private readonly api = inject(UsersApi);
   private readonly dialog = inject(MatDialog);
-  private readonly sitesApi = inject(SitesApi);
-  private readonly sites = toSignal(this.sitesApi.list(), { initialValue: [] });
-  protected readonly siteList = rxResource({ stream: () => this.sitesApi.list() });
+  private readonly sites = toSignal(inject(SitesApi).list(), { initialValue: [] });
 
   protected readonly columns = ['name', 'email', 'roles', 'sites', 'status', 'actions'];
   protected readonly query = signal<UserPageQuery>({ search: '', sort: 'name', direction: 'asc', page: 0, pageSize: 25 });
@@ -63,13 +58,6 @@ export class Users {
 
   protected page(event: PageEvent): void {
     this.query.update((q) => ({ ...q, page: event.pageIndex, pageSize: event.pageSize }));
-  }
-
-  protected openSite(site: SiteView): void {
-    this.dialog
-      .open(SiteDialog, { data: site, width: '520px', maxWidth: '95vw', autoFocus: 'first-tabbable' })
-      .afterClosed()
-      .subscribe((saved) => saved && this.siteList.reload());
   }
 
   protected openUser(user: UserSummary | null): void {

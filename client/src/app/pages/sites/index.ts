@@ -1,0 +1,1 @@
+export { Sites as default } from './sites';
