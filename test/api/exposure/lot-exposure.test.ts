@@ -3,7 +3,7 @@ import { expect } from 'chai';
 import { QueryTypes } from 'sequelize';
 import { StockMovement } from '../../../database/models/index.js';
 import { ownerConnection, resetDatabase } from '../../support/test-database.js';
-import { createSite, signInAs } from '../../support/test-app.js';
+import { createSite, signInAs, testContext } from '../../support/test-app.js';
 import { createLogger } from '../../support/fridge-fixtures.js';
 import { createPresentation, createProduct, createSiteFridge, stockLot } from '../../support/flock-fixtures.js';
 
@@ -15,6 +15,7 @@ async function storeReadings(loggerId: number, start: number, stepMinutes: numbe
 }
 
 describe('lot exposure API', () => {
+  before(() => void testContext());
   beforeEach(resetDatabase);
 
   it('reports the hour above the product range that the lot sat through, and the transfer it made after (hand-computed)', async () => {

@@ -2,7 +2,7 @@
 import { expect } from 'chai';
 import { siteLocalDate } from '../../../shared/receiving/site-local-date.js';
 import { resetDatabase } from '../../support/test-database.js';
-import { createSite, signInAs } from '../../support/test-app.js';
+import { createSite, signInAs, testContext } from '../../support/test-app.js';
 import { createCatalogue, createPurchaseOrder } from '../../support/receiving-fixtures.js';
 
 function shiftDays(date: string, days: number): string {
@@ -10,6 +10,7 @@ function shiftDays(date: string, days: number): string {
 }
 
 describe('purchase orders', () => {
+  before(() => void testContext());
   beforeEach(resetDatabase);
 
   it('purchasing creates an order with lines in packs; it shows vials from the presentation', async () => {

@@ -2,9 +2,10 @@
 import { expect } from 'chai';
 import { AuditEntry } from '../../../database/models/index.js';
 import { resetDatabase } from '../../support/test-database.js';
-import { createSite, signInAs } from '../../support/test-app.js';
+import { createSite, signInAs, testContext } from '../../support/test-app.js';
 
 describe('sites', () => {
+  before(() => void testContext());
   beforeEach(resetDatabase);
 
   it('a user limited to one site lists only that site; an all-sites user lists both', async () => {
