@@ -17,6 +17,7 @@ import type { LoggerView } from '@shared/fridges/logger-schemas.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ApiError } from '../../core/http/api-error';
 import { SitesApi } from '../../core/sites/sites-api';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { FridgeDialog, type FridgeDialogData } from '../fridges/fridge-dialog';
 import { FridgesApi } from '../fridges/fridges-api';
@@ -29,7 +30,7 @@ import { CountDueNote } from '../stock-count/count-due-note';
 
 @Component({
   selector: 'vy-fridge',
-  imports: [FridgeChart, CountDueNote, MatButtonModule, MatIconModule, MatTableModule, MatProgressBarModule, MatFormFieldModule, MatInputModule, RouterLink, DatePipe, DecimalPipe, TemperaturePipe],
+  imports: [FridgeChart, CountDueNote, MatButtonModule, MatIconModule, MatTableModule, MatProgressBarModule, MatFormFieldModule, MatInputModule, RouterLink, DatePipe, DecimalPipe, SiteTimePipe, TemperaturePipe],
   templateUrl: './fridge.html',
   styleUrl: './fridge.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -12,7 +12,7 @@ import { RouterLink } from '@angular/router';
 import { firstValueFrom, of } from 'rxjs';
 import { presentationLabel } from '@shared/catalogue/presentation-label.js';
 import type { ProductStockSettingsView } from '@shared/demand/demand-schemas.js';
-import type { ReorderSuggestion } from '@shared/demand/projection-types.js';
+import type { ExpireUnusedAlert, ExpiringAlert, ReorderSuggestion } from '@shared/demand/projection-types.js';
 import type { SentOrderView } from '@shared/demand/sent-order-view.js';
 import type { TransferCandidate } from '@shared/demand/transfer-candidates.js';
 import { AuthStore } from '../../core/auth/auth-store';
@@ -53,6 +53,20 @@ export class Purchasing {
   protected readonly productColumns = computed(() => ['product', 'onHand', 'onHold', 'incoming', 'needed', 'short', 'safety', 'lowest', ...(this.canBuy() ? ['settings'] : [])]);
   protected readonly suggestionColumns = computed(() => ['product', 'supplier', 'needDate', 'orderBy', 'quantity', 'value', ...(this.canBuy() ? ['order'] : [])]);
   protected readonly settingsByProduct = computed(() => new Map((this.p()?.settings ?? []).map((s) => [s.productId, s])));
+  /**
+   * Each lot once: a lot the plan leaves to expire unused is listed there (it costs money), with its expiry alert as a
+   * note; "expiring soon" keeps only the other lots. The home card shows them the same way.
+   */
+  protected readonly expiringStock = computed(() => {
+    const alerts = this.p()?.alerts;
+    if (!alerts) return { unused: [] as (ExpireUnusedAlert & { soon?: ExpiringAlert })[], soon: [] as ExpiringAlert[] };
+    const soonByLot = new Map(alerts.expiring.map((a) => [a.lotId, a]));
+    const unusedLots = new Set(alerts.expireUnused.map((a) => a.lotId));
+    return {
+      unused: alerts.expireUnused.map((a) => ({ ...a, soon: soonByLot.get(a.lotId) })),
+      soon: alerts.expiring.filter((a) => !unusedLots.has(a.lotId)),
+    };
+  });
 
   protected pdfUrl(order: SentOrderView): string {
     return this.api.pdfUrl(order.id);

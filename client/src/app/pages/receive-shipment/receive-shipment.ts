@@ -1,5 +1,6 @@
 // The receiving form: mobile-first, one-handed; the draft is kept on the phone and survives a reload or a lost connection.
-import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, OnInit, computed, inject, input, signal, viewChild } from '@angular/core';
+import { DOCUMENT } from '@angular/common';
+import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, Injector, OnInit, afterNextRender, computed, inject, input, signal, viewChild, viewChildren } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -61,7 +62,10 @@ export class ReceiveShipment implements OnInit {
   private readonly snackBar = inject(MatSnackBar);
   private readonly router = inject(Router);
   private readonly destroyRef = inject(DestroyRef);
+  private readonly injector = inject(Injector);
+  private readonly document = inject(DOCUMENT);
   private readonly scanner = viewChild.required(LotScanner);
+  private readonly lineCards = viewChildren(ShipmentLineCard);
   private readonly readingField = viewChild<ElementRef<HTMLInputElement>>('readingField');
 
   protected readonly form = createShipmentForm(this.fb, this.auth.displayUnit());
@@ -116,8 +120,32 @@ export class ReceiveShipment implements OnInit {
     this.form.valueChanges.pipe(debounceTime(250), takeUntilDestroyed(this.destroyRef)).subscribe(() => this.saveDraft());
     // Once the reading is placed, scanning comes next: the scan field takes the focus (a hand scanner types into it).
     this.form.controls.readingPlace.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((place) => {
-      if (place !== null && this.form.controls.lines.getRawValue().some((line) => !line.lotNumber)) this.scanner().focus();
+      if (place !== null && this.lotsToScan()) this.scanner().focus();
     });
+    // A draft reopened past the checks and the reading opens on the lots: ready for the next carton.
+    if (this.onLotsStep()) this.focusScanUnlessBusy();
+  }
+
+  /** Lines still waiting for their lot, or none yet: scanning is what is left to do. */
+  private lotsToScan(): boolean {
+    const lines = this.form.controls.lines.getRawValue();
+    return lines.length === 0 || lines.some((line) => !line.lotNumber);
+  }
+
+  /** The checks answered and the reading placed: the form is at its lots (another carton may still come). */
+  private onLotsStep(): boolean {
+    const { checks, readingPlace } = this.form.getRawValue();
+    return readingPlace !== null && Object.values(checks).every((answer) => answer !== null);
+  }
+
+  /**
+   * The scan field takes the focus, unless the person is in another field (typing there while the page loaded): the
+   * focus is theirs. Only a field they chose keeps it; nothing focused, or a button that went away, does not.
+   */
+  private focusScanUnlessBusy(): void {
+    const active = this.document.activeElement;
+    const typing = active instanceof HTMLElement && active.matches('input, textarea, select, [contenteditable="true"], [role="combobox"]');
+    if (!typing) this.scanner().focus();
   }
 
   private async startNew(context: ReceivingContext | null): Promise<void> {
@@ -205,8 +233,16 @@ export class ReceiveShipment implements OnInit {
     this.form.controls.lines.push(lineGroup(this.fb, value));
   }
 
+  /** "Add a lot by hand": there is no barcode to scan, so the focus goes to the new line's first field, once drawn. */
+  protected addLineByHand(): void {
+    this.addLine();
+    afterNextRender(() => this.lineCards().at(-1)?.focusFirstField(), { injector: this.injector });
+  }
+
+  /** The removed line's button goes with it; rather than leave the focus nowhere, it returns to the scan field. */
   protected removeLine(index: number): void {
     this.form.controls.lines.removeAt(index);
+    afterNextRender(() => this.focusScanUnlessBusy(), { injector: this.injector });
   }
 
   protected addPhotos(files: File[]): void {

@@ -1,5 +1,5 @@
 // One lot on the receiving form: what it is, its counts (intact follows the others until typed), acceptance and storage.
-import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, inject, input, output, viewChild } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -7,7 +7,7 @@ import { MatExpansionModule } from '@angular/material/expansion';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatSelectModule } from '@angular/material/select';
+import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { merge } from 'rxjs';
 import { controlMessage } from '../../core/forms/server-errors';
@@ -35,6 +35,7 @@ export class ShipmentLineCard implements OnInit {
   readonly refused = input(false);
   readonly removed = output<void>();
   protected readonly message = controlMessage;
+  private readonly presentationSelect = viewChild.required<MatSelect>('presentation');
   protected readonly counts = [
     { name: 'vialsExpected', label: 'Expected' },
     { name: 'vialsIntact', label: 'Intact' },
@@ -50,6 +51,11 @@ export class ShipmentLineCard implements OnInit {
       .subscribe(() => {
         if (!c.vialsIntact.dirty) c.vialsIntact.setValue(Math.max(0, (c.vialsExpected.value || 0) - (c.vialsBroken.value || 0) - (c.vialsMissing.value || 0)));
       });
+  }
+
+  /** A line added by hand starts at what it is: the product and pack. */
+  focusFirstField(): void {
+    this.presentationSelect().focus();
   }
 
   protected labelOf(id: number | null): string {

@@ -1,0 +1,14 @@
+// Shows an instant on a site's own clock with the zone's short name: the farm's time, not the reader's browser's.
+import { LOCALE_ID, Pipe, PipeTransform, inject } from '@angular/core';
+import { siteTimeText, type SiteTimeStyle } from '@shared/sites/site-clock.js';
+
+/** `{{ check.checkedAt | siteTime: fridge.timeZone }}` ("Dec 4, 2026, 8:30 AM CST"), or `| siteTime: zone : 'time'` ("8:30 AM CST"). */
+@Pipe({ name: 'siteTime' })
+export class SiteTimePipe implements PipeTransform {
+  private readonly locale = inject(LOCALE_ID);
+
+  transform(instant: string | Date | null | undefined, timeZone: string | null | undefined, style: SiteTimeStyle = 'medium'): string {
+    if (instant == null || instant === '') return '—';
+    return siteTimeText(instant, timeZone || 'UTC', style, this.locale);
+  }
+}
