@@ -116,8 +116,12 @@ export async function seedDemoReceiving(transaction: Transaction): Promise<void>
     { transaction },
   );
   await StockMovement.create({ lotId: ibLot.id, kind: 'receive', vials: 9, toFridgeId: brooder.id, fromFridgeId: null, leftAt: null, at: warmStored, sourceKind: 'shipment_line', sourceId: warmLine.id, recordedBy: admin.id }, { transaction });
+  // The hold dates from the delivery it was found at, as receiving's own would; the column's default is the seeding time.
   await Hold.create(
-    { lotId: ibLot.id, cause: 'arrival', sourceKind: 'shipment', sourceId: warm.id, reason: "The reading 49 °F is above Fernhollow IB drinking-water vaccine's label range 35–45 °F.", openedBy: admin.id },
+    {
+      lotId: ibLot.id, cause: 'arrival', sourceKind: 'shipment', sourceId: warm.id, reason: "The reading 49 °F is above Fernhollow IB drinking-water vaccine's label range 35–45 °F.",
+      openedBy: admin.id, openedAt: warmArrived,
+    },
     { transaction },
   );
 }

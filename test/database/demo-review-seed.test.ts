@@ -8,7 +8,7 @@ import { expect } from 'chai';
 import { QueryTypes } from 'sequelize';
 import { PasswordHasher } from '../../api/auth/password-hasher.js';
 import { fridgeCountStates } from '../../api/stock-counts/count-due-service.js';
-import { ExposureEvent, Hold, HoldDecision, Notification, TroubleshootingRecord, User } from '../../database/models/index.js';
+import { ExposureEvent, Hold, HoldDecision, Notification, Shipment, TroubleshootingRecord, User } from '../../database/models/index.js';
 import { seedDemoScenario } from '../../database/seeders/demo-scenario.js';
 import { resetDatabase } from '../support/test-database.js';
 import { testContext } from '../support/test-app.js';
@@ -54,6 +54,15 @@ describe('the demo scenario for the review', function () {
     const record = (await TroubleshootingRecord.findOne({ where: { exposureEventId: open.id } }))!;
     expect(record.whatHappened, 'started').to.not.equal('');
     expect(record.preventiveAction, 'not finished').to.equal('');
+  });
+
+  it('dates the warm delivery’s arrival hold from the shipment’s arrival, not from the seeding', async () => {
+    const warm = (await Shipment.findOne({ where: { trackingNumber: 'FW26040417' } }))!;
+    const holds = await Hold.findAll({ where: { cause: 'arrival', sourceKind: 'shipment', sourceId: warm.id } });
+    expect(holds).to.have.length(1);
+    expect(holds[0]!.openedAt.toISOString()).to.equal(warm.arrivedAt.toISOString());
+    // Three days back, as the demo tells it: well before the seeding, which is what the column would default to.
+    expect(Date.now() - holds[0]!.openedAt.getTime()).to.be.greaterThan(2 * 86_400_000);
   });
 
   it('leaves unread notifications for the veterinarian and storage, and one fridge due for its count', async () => {

@@ -1,0 +1,62 @@
+// In Chromium, on the seeded demo: the hold the warm delivery opened says it was opened when the shipment arrived
+// (three days before the seeding), as receiving's own hold would.
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { expect } from 'chai';
+import { PasswordHasher } from '../../api/auth/password-hasher.js';
+import { Lot, Shipment } from '../../database/models/index.js';
+import { demoAccounts, seedDemoScenario } from '../../database/seeders/demo-scenario.js';
+import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { browserSuite } from '../support/browser-suite.js';
+import { resetDatabase } from '../support/test-database.js';
+import { testContext } from '../support/test-app.js';
+
+describe('the demo’s arrival hold in Chromium', function () {
+  this.timeout(180_000);
+  const suite = browserSuite();
+  let uploads: string;
+  const previousUploads = process.env.UPLOADS_DIR;
+  before(async () => {
+    await resetDatabase();
+    uploads = await mkdtemp(join(tmpdir(), 'vialyard-demo-hold-'));
+    process.env.UPLOADS_DIR = uploads;
+    const hasher = new PasswordHasher(4);
+    expect(await seedDemoScenario(testContext().sequelize, (password) => hasher.hash(password))).to.equal(true);
+  });
+  after(async () => {
+    if (previousUploads === undefined) delete process.env.UPLOADS_DIR;
+    else process.env.UPLOADS_DIR = previousUploads;
+    await rm(uploads, { recursive: true, force: true });
+    await resetDatabase();
+  });
+
+  it('shows the hold on lot FIB0932 opened at the delivery’s arrival, not at the seeding', async () => {
+    const warm = (await Shipment.findOne({ where: { trackingNumber: 'FW26040417' } }))!;
+    const lot = (await Lot.findOne({ where: { lotNumber: 'FIB0932' } }))!;
+    const vet = demoAccounts.find((a) => a.roles.includes('veterinarian'))!;
+    const context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 }, timezoneId: 'UTC' });
+    try {
+      const page = await context.newPage();
+      await page.goto(`${suite.server.url}/sign-in`);
+      await page.getByLabel('E-mail').fill(vet.email);
+      await page.getByLabel('Password', { exact: true }).fill(vet.password);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.getByRole('navigation', { name: 'Main' }).waitFor();
+      await page.goto(`${suite.server.url}/lots/${lot.id}`);
+      const hold = page.getByRole('article', { name: 'Arrival hold' });
+      await hold.waitFor();
+      const opened = await hold.getByText(/^Opened /).innerText();
+      // The page's medium date, in the browser's zone (UTC here): "Dec 1, 2026, 6:49:18 PM".
+      const day = (ms: number) => new Date(ms).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+      expect(opened).to.contain(`Opened ${day(warm.arrivedAt.getTime())},`);
+      expect(opened).to.not.contain(day(Date.now()));
+      await hold.scrollIntoViewIfNeeded();
+      await page.screenshot({ path: screenshotPath('demo-hold-ux-lot') });
+      const violations = await seriousAccessibilityViolations(page);
+      expect(violations, describeViolations(violations)).to.have.length(0);
+    } finally {
+      await context.close();
+    }
+  });
+});
