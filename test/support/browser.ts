@@ -4,6 +4,7 @@ import { existsSync, mkdirSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import { runtimeDir } from '../../database/scripts/runtime-dir.js';
+import { testPassword } from './test-app.js';
 
 export const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
@@ -59,4 +60,13 @@ export async function seriousAccessibilityViolations(page: Page): Promise<AxeVio
 
 export function describeViolations(violations: AxeViolation[]): string {
   return violations.map((v) => `${v.impact} ${v.id}: ${v.help} at ${v.nodes.map((n) => n.target.join(' ')).join('; ')}`).join('\n');
+}
+
+/** Signs in through the sign-in page as a person does, and waits for the home page's greeting. */
+export async function signInOnPage(page: Page, baseUrl: string, email: string, password = testPassword): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { level: 1 }).filter({ hasText: /Good (morning|afternoon|evening)/ }).waitFor();
 }

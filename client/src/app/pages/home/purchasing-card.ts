@@ -10,10 +10,11 @@ import { EMPTY, map } from 'rxjs';
 import type { PurchaseOrderView } from '@shared/receiving/purchase-order-schemas.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
+import { CountPipe } from '../../shared/text/count-pipe';
 
 @Component({
   selector: 'vy-purchasing-card',
-  imports: [MatCardModule, MatButtonModule, MatIconModule, RouterLink],
+  imports: [MatCardModule, MatButtonModule, MatIconModule, RouterLink, CountPipe],
   template: `
     @if (visible()) {
       <mat-card appearance="outlined">
@@ -22,9 +23,9 @@ import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
           <mat-card-title><h2>Purchasing</h2></mat-card-title>
         </mat-card-header>
         <mat-card-content>
-          <p>{{ openOrders() ?? '…' }} open orders.</p>
+          <p>{{ openOrders() === undefined ? '…' : (openOrders() | count: 'open order') }}.</p>
           @if (proposals()) {
-            <p class="waiting">{{ proposals() }} new barcode(s) from receiving to confirm.</p>
+            <p class="waiting">{{ proposals() | count: 'new barcode' }} from receiving to confirm.</p>
           }
         </mat-card-content>
         <mat-card-actions>

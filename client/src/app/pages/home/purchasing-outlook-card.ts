@@ -40,6 +40,11 @@ export class PurchasingOutlookCard {
   });
   protected readonly expiring = computed(() => this.allExpiring().slice(0, SHOWN));
   protected readonly openOrders = computed(() => (this.overview()?.openOrders ?? []).slice(0, SHOWN));
+  /** The site of the most urgent item (a shortfall, else an order to place): where "Open purchasing" goes. */
+  protected readonly urgentSite = computed(() => {
+    const o = this.overview();
+    return o?.shortfalls[0]?.siteId ?? o?.ordersToPlace[0]?.siteId ?? o?.expireUnused[0]?.siteId ?? o?.expiring[0]?.siteId ?? null;
+  });
   protected readonly counts = computed(() => {
     const o = this.overview();
     return o ? { short: o.totals.shortfalls, place: o.totals.ordersToPlace, expiring: o.totals.expiringLots, open: o.totals.openOrders } : null;

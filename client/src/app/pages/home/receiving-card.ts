@@ -21,18 +21,33 @@ import { ReceivingApi } from '../../shared/receiving/receiving-api';
         </mat-card-header>
         <mat-card-content>
           @if (expected(); as list) {
-            <p>{{ dueToday() }} due today · {{ overdue() }} overdue.</p>
+            @if (bySite().length) {
+              <ul class="sites">
+                @for (site of bySite(); track site.siteId) {
+                  <li>
+                    <a [routerLink]="['/receiving']" [queryParams]="{ site: site.siteId }">{{ site.siteName }}</a>:
+                    {{ site.today }} due today · <span [class.bad]="site.overdue > 0">{{ site.overdue }} overdue</span>
+                  </li>
+                }
+              </ul>
+            } @else {
+              <p>Nothing due today or overdue.</p>
+            }
           } @else {
             <p>Loading…</p>
           }
         </mat-card-content>
         <mat-card-actions>
-          <a mat-flat-button routerLink="/receiving">Open receiving</a>
+          <a mat-flat-button routerLink="/receiving" [queryParams]="bySite().length ? { site: bySite()[0].siteId } : {}">Open receiving</a>
         </mat-card-actions>
       </mat-card>
     }
   `,
-  styles: `h2 { margin: 0; font: var(--mat-sys-title-medium); }`,
+  styles: `
+    h2 { margin: 0; font: var(--mat-sys-title-medium); }
+    .sites { margin: 0; padding-left: 20px; }
+    .bad { color: var(--mat-sys-error); }
+  `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ReceivingCard {
@@ -42,6 +57,15 @@ export class ReceivingCard {
     return this.auth.hasRole('admin', 'receiving');
   });
   protected readonly expected = toSignal(this.auth.hasRole('admin', 'receiving') ? inject(ReceivingApi).expected() : EMPTY);
-  protected readonly dueToday = computed(() => (this.expected() ?? []).filter((o) => o.due === 'today').length);
-  protected readonly overdue = computed(() => (this.expected() ?? []).filter((o) => o.due === 'overdue').length);
+  /** Sites with shipments due today or overdue, the most overdue first: each links to its own receiving list. */
+  protected readonly bySite = computed(() => {
+    const sites = new Map<number, { siteId: number; siteName: string; today: number; overdue: number }>();
+    for (const order of this.expected() ?? []) {
+      if (order.due !== 'today' && order.due !== 'overdue') continue;
+      const site = sites.get(order.siteId) ?? { siteId: order.siteId, siteName: order.siteName, today: 0, overdue: 0 };
+      site[order.due === 'today' ? 'today' : 'overdue']++;
+      sites.set(order.siteId, site);
+    }
+    return [...sites.values()].sort((a, b) => b.overdue - a.overdue || b.today - a.today || a.siteName.localeCompare(b.siteName));
+  });
 }

@@ -17,10 +17,11 @@ import { applyServerErrors, controlMessage } from '../../core/forms/server-error
 import { ApiError } from '../../core/http/api-error';
 import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
 import { FlocksApi } from '../../shared/flocks/flocks-api';
+import { CountPipe } from '../../shared/text/count-pipe';
 
 @Component({
   selector: 'vy-programme-dialog',
-  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatSlideToggleModule, MatButtonModule, MatIconModule],
+  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatSlideToggleModule, MatButtonModule, MatIconModule, CountPipe],
   templateUrl: './programme-dialog.html',
   styleUrls: ['../../shared/flocks/form-dialog.scss', './programme-dialog.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -11,10 +11,11 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { FlocksApi } from '../../shared/flocks/flocks-api';
 import { StatusChip } from '../../shared/flocks/status-chip';
 import { ProgrammeDialog } from './programme-dialog';
+import { CountPipe } from '../../shared/text/count-pipe';
 
 @Component({
   selector: 'vy-programmes',
-  imports: [MatCardModule, MatButtonModule, MatIconModule, StatusChip],
+  imports: [MatCardModule, MatButtonModule, MatIconModule, StatusChip, CountPipe],
   templateUrl: './programmes.html',
   styleUrl: './programmes.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -8,7 +8,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatTableModule } from '@angular/material/table';
-import { RouterLink } from '@angular/router';
+import { ActivatedRoute, RouterLink } from '@angular/router';
 import { firstValueFrom, of } from 'rxjs';
 import { presentationLabel } from '@shared/catalogue/presentation-label.js';
 import type { ProductStockSettingsView } from '@shared/demand/demand-schemas.js';
@@ -24,10 +24,11 @@ import { StatusChip } from '../../shared/flocks/status-chip';
 import { OrderDialog, type OrderDialogData } from './order-dialog';
 import { StockSettingsDialog, type StockSettingsDialogData } from './stock-settings-dialog';
 import { TransferDialog, type TransferDialogData } from './transfer-dialog';
+import { CountPipe } from '../../shared/text/count-pipe';
 
 @Component({
   selector: 'vy-purchasing',
-  imports: [MatTableModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DecimalPipe, CurrencyPipe, DatePipe, SitePicker, StatusChip],
+  imports: [MatTableModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DecimalPipe, CurrencyPipe, DatePipe, SitePicker, StatusChip, CountPipe],
   templateUrl: './purchasing.html',
   styleUrl: './purchasing.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,7 +41,9 @@ export class Purchasing {
   private readonly catalogue = inject(CatalogueApi);
   private readonly suppliers = toSignal(this.catalogue.suppliers(), { initialValue: [] });
   protected readonly sites = toSignal(inject(SitesApi).list(), { initialValue: [] });
-  protected readonly siteId = linkedSignal<number | null>(() => this.sites()[0]?.id ?? null);
+  /** A link may name the site (`?site=`, as the home card's does); else the first of the user's sites. */
+  private readonly linkedSite = Number(inject(ActivatedRoute).snapshot.queryParamMap.get('site')) || null;
+  protected readonly siteId = linkedSignal<number | null>(() => this.sites().find((site) => site.id === this.linkedSite)?.id ?? this.sites()[0]?.id ?? null);
   protected readonly canBuy = computed(() => {
     this.auth.user();
     return this.auth.hasRole('admin', 'purchasing');

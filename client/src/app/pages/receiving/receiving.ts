@@ -7,18 +7,19 @@ import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
-import { RouterLink } from '@angular/router';
+import { ActivatedRoute, RouterLink } from '@angular/router';
 import { AuthStore } from '../../core/auth/auth-store';
 import { SitesApi } from '../../core/sites/sites-api';
 import { OutcomeChip } from '../../shared/receiving/outcome-chip';
 import { ReceivingApi } from '../../shared/receiving/receiving-api';
 import { ReceivingDraftStore } from '../receive-shipment/receiving-draft-store';
+import { CountPipe } from '../../shared/text/count-pipe';
 
 const dueLabels = { overdue: 'Overdue', today: 'Due today', later: 'Coming' } as const;
 
 @Component({
   selector: 'vy-receiving',
-  imports: [MatButtonModule, MatCardModule, MatIconModule, MatFormFieldModule, MatSelectModule, RouterLink, DatePipe, OutcomeChip],
+  imports: [MatButtonModule, MatCardModule, MatIconModule, MatFormFieldModule, MatSelectModule, RouterLink, DatePipe, OutcomeChip, CountPipe],
   templateUrl: './receiving.html',
   styleUrl: './receiving.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,8 +29,9 @@ export class Receiving {
   private readonly auth = inject(AuthStore);
   private readonly drafts = inject(ReceivingDraftStore);
   protected readonly sites = toSignal(inject(SitesApi).list(), { initialValue: [] });
-  protected readonly chosenSite = signal<number | null>(null);
-  protected readonly siteId = computed(() => this.chosenSite() ?? this.sites()[0]?.id ?? null);
+  /** A link may name the site (`?site=`, as the home card's do); else the first of the user's sites. */
+  protected readonly chosenSite = signal<number | null>(Number(inject(ActivatedRoute).snapshot.queryParamMap.get('site')) || null);
+  protected readonly siteId = computed(() => this.sites().find((site) => site.id === this.chosenSite())?.id ?? this.sites()[0]?.id ?? null);
   protected readonly canReceive = computed(() => {
     this.auth.user();
     return this.auth.hasRole('admin', 'receiving');
