@@ -2,7 +2,7 @@
 import type { Sequelize } from 'sequelize';
 import { holdCauseLabels, holdCauses, type HoldCause } from '../../shared/lots/hold-causes.js';
 import type { QueueEvent } from '../../shared/lots/review-queue.js';
-import { ExposureEvent, Fridge, Recall, User } from '../../database/models/index.js';
+import { ExposureEvent, Fridge, Recall, Site, User } from '../../database/models/index.js';
 import { exposureEventDecided, toExposureEventView } from './exposure-event-service.js';
 import { exposureSourceKind } from './exposure-holds.js';
 import { troubleshootingRecord } from './troubleshooting-service.js';
@@ -19,6 +19,8 @@ export async function addEventDetails(sequelize: Sequelize, event: QueueEvent): 
       event.exposureEvent = toExposureEventView(row, fridge, await exposureEventDecided(sequelize, row.id));
       event.title = event.exposureEvent.title;
       event.troubleshooting = await troubleshootingRecord(row.id);
+      // The readings were taken at the fridge: its site's clock, wherever the lots went since.
+      event.timeZone = (await Site.findByPk(fridge.siteId, { attributes: ['timeZone'] }))?.timeZone ?? event.timeZone;
     }
   }
   if (event.sourceKind === 'recall' && event.sourceId !== null) {

@@ -12,6 +12,7 @@ interface Row {
   doses_per_vial: number;
   vials: number;
   site_id: number;
+  time_zone: string | null;
   cause: string;
   source_kind: string;
   source_id: number | null;
@@ -23,10 +24,13 @@ export async function reviewQueue(sequelize: Sequelize, user: Express.User): Pro
   const rows = await sequelize.query<Row>(
     `SELECT h.id AS hold_id, l.id AS lot_id, l.lot_number, l.expiry::text AS expiry, pr.name AS product, p.doses_per_vial,
             coalesce((SELECT sum(b.vials) FROM stock_balances b WHERE b.lot_id = l.id), 0)::int AS vials,
-            (SELECT f.site_id FROM stock_movements m JOIN fridges f ON f.id = coalesce(m.to_fridge_id, m.from_fridge_id)
-              WHERE m.lot_id = l.id ORDER BY m.at, m.id LIMIT 1) AS site_id,
+            first_site.site_id, first_site.time_zone,
             h.cause, h.source_kind, h.source_id, h.reason, h.opened_at
        FROM holds h JOIN lots l ON l.id = h.lot_id JOIN presentations p ON p.id = l.presentation_id JOIN products pr ON pr.id = p.product_id
+       LEFT JOIN LATERAL (
+         SELECT f.site_id, s.time_zone FROM stock_movements m JOIN fridges f ON f.id = coalesce(m.to_fridge_id, m.from_fridge_id) JOIN sites s ON s.id = f.site_id
+          WHERE m.lot_id = l.id ORDER BY m.at, m.id LIMIT 1
+       ) first_site ON true
       WHERE NOT EXISTS (SELECT 1 FROM hold_decisions d WHERE d.hold_id = h.id)
       ORDER BY h.opened_at, h.id`,
     { type: QueryTypes.SELECT },
@@ -37,8 +41,10 @@ export async function reviewQueue(sequelize: Sequelize, user: Express.User): Pro
     const key = `${row.cause}:${row.source_kind}:${row.source_id}`;
     const event = events.get(key) ?? {
       cause: row.cause, sourceKind: row.source_kind, sourceId: row.source_id, openedAt: row.opened_at.toISOString(), lots: [], vials: 0, doses: 0,
-      title: '', severe: false, exposureEvent: null, troubleshooting: null, recall: null,
+      title: '', severe: false, timeZone: row.time_zone, exposureEvent: null, troubleshooting: null, recall: null,
     };
+    // Lots of one event on several sites (a recall) have no one site's clock.
+    if (event.lots.length && event.lots.some((lot) => lot.siteId !== row.site_id)) event.timeZone = null;
     const doses = row.vials * row.doses_per_vial;
     event.lots.push({
       holdId: row.hold_id, lotId: row.lot_id, lotNumber: row.lot_number, expiry: row.expiry, product: row.product,

@@ -131,8 +131,9 @@ export async function lotFilterOptions(sequelize: Sequelize, user: Express.User)
   const replacements = visibleSites(user);
   const sites = await sequelize.query<{ id: number; name: string }>(
     'SELECT id, name FROM sites WHERE (:allSites OR id IN (:siteIds)) ORDER BY name', { replacements, type: QueryTypes.SELECT });
-  const fridges = await sequelize.query<{ id: number; code: string; name: string; siteId: number }>(
-    'SELECT id, code, name, site_id AS "siteId" FROM fridges WHERE (:allSites OR site_id IN (:siteIds)) ORDER BY code', { replacements, type: QueryTypes.SELECT });
+  const fridges = await sequelize.query<LotFilterOptions['fridges'][number]>(
+    `SELECT f.id, f.code, f.name, f.site_id AS "siteId", s.time_zone AS "timeZone" FROM fridges f JOIN sites s ON s.id = f.site_id
+      WHERE (:allSites OR f.site_id IN (:siteIds)) ORDER BY f.code`, { replacements, type: QueryTypes.SELECT });
   const products = await sequelize.query<{ id: number; name: string }>(
     `SELECT DISTINCT pr.id, pr.name FROM products pr JOIN presentations p ON p.product_id = pr.id JOIN lots l ON l.presentation_id = p.id
        JOIN stock_movements m ON m.lot_id = l.id JOIN fridges f ON f.id = coalesce(m.to_fridge_id, m.from_fridge_id)

@@ -22,9 +22,14 @@ export async function lotPage(sequelize: Sequelize, user: Express.User, lotId: n
   const place = (fridgeId: number | null): LotPagePlace | null => {
     if (fridgeId === null) return null;
     const fridge = fridges.get(fridgeId)!;
-    if (!canSeeSite(user, fridge.siteId)) return { fridgeId: null, fridgeCode: '', siteId: null, siteName: 'Another site' };
-    return { fridgeId, fridgeCode: fridge.code, siteId: fridge.siteId, siteName: sites.get(fridge.siteId)?.name ?? '' };
+    if (!canSeeSite(user, fridge.siteId)) return { fridgeId: null, fridgeCode: '', siteId: null, siteName: 'Another site', timeZone: null };
+    const site = sites.get(fridge.siteId);
+    return { fridgeId, fridgeCode: fridge.code, siteId: fridge.siteId, siteName: site?.name ?? '', timeZone: site?.timeZone ?? null };
   };
+  // Movements come in the order they happened: the first site the user sees is where the lot first reached them.
+  const siteOrder = movements.flatMap((m) => [m.fromFridgeId, m.toFridgeId]).filter((id): id is number => id !== null).map((id) => fridges.get(id)!.siteId);
+  const lotSiteId = siteOrder.find((id) => canSeeSite(user, id)) ?? siteOrder[0];
+  const timeZone = (lotSiteId !== undefined && sites.get(lotSiteId)?.timeZone) || 'UTC';
   const recorders = new Map((await User.findAll({ where: { id: [...new Set(movements.map((m) => m.recordedBy).filter((id): id is number => id !== null))] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
 
   const holds = await Hold.findAll({ where: { lotId }, order: [['openedAt', 'ASC'], ['id', 'ASC']] });
@@ -66,6 +71,7 @@ export async function lotPage(sequelize: Sequelize, user: Express.User, lotId: n
     })).reverse(),
     flocks: await flocksThatReceived(sequelize, user, lotId),
     plannedTransfers: await openPlannedTransfers(sequelize, user, lotId),
+    timeZone,
     exposure,
   };
 }
@@ -74,7 +80,7 @@ export async function lotPage(sequelize: Sequelize, user: Express.User, lotId: n
 function mergeElsewhere(locations: LotPage['locations']): LotPage['locations'] {
   const visible = locations.filter((l) => l.fridgeId !== null).sort((a, b) => a.siteName.localeCompare(b.siteName) || a.fridgeCode.localeCompare(b.fridgeCode));
   const elsewhere = locations.filter((l) => l.fridgeId === null).reduce((sum, l) => sum + l.vials, 0);
-  return elsewhere ? [...visible, { fridgeId: null, fridgeCode: '', siteId: null, siteName: 'Another site', vials: elsewhere }] : visible;
+  return elsewhere ? [...visible, { fridgeId: null, fridgeCode: '', siteId: null, siteName: 'Another site', timeZone: null, vials: elsewhere }] : visible;
 }
 
 async function openPlannedTransfers(sequelize: Sequelize, user: Express.User, lotId: number): Promise<LotPage['plannedTransfers']> {

@@ -25,6 +25,7 @@ export async function loadRunView(context: AppContext, vaccinationId: number, op
     status: vaccination.status,
     siteId: site.id,
     siteName: site.name,
+    timeZone: site.timeZone,
     houseName: facts.house.name,
     flockId: facts.flock.id,
     flockName: facts.flock.name,

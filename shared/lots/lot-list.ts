@@ -48,5 +48,6 @@ export interface LotListPage {
 export interface LotFilterOptions {
   products: { id: number; name: string }[];
   sites: { id: number; name: string }[];
-  fridges: { id: number; code: string; name: string; siteId: number }[];
+  /** With the site's zone: a transfer's arrival time is typed on the receiving fridge's site's clock. */
+  fridges: { id: number; code: string; name: string; siteId: number; timeZone: string }[];
 }

@@ -32,6 +32,8 @@ export interface LotPagePlace {
   fridgeCode: string;
   siteId: number | null;
   siteName: string;
+  /** The site's zone, whose clock a movement's time there is shown on; null for another site. */
+  timeZone: string | null;
 }
 
 export interface LotPageLocation extends LotPagePlace {
@@ -90,6 +92,11 @@ export interface LotPage {
   flocks: LotPageFlock[];
   /** Open planned transfers whose both sites the user sees. */
   plannedTransfers: LotPagePlannedTransfer[];
+  /**
+   * The zone of the lot's site (the first the user sees, in the order its vials reached them): its holds, decisions and
+   * exposure times are shown on that clock; a movement's on the clock of the site it happened at.
+   */
+  timeZone: string;
   /** What the lot lived through, judged by its own product's range (as GET /api/exposure/lots/:lotId computes it). */
   exposure: LotExposure & { limits: { lowC: number; highC: number } };
 }

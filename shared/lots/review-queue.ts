@@ -34,6 +34,11 @@ export interface QueueEvent {
   title: string;
   /** Freezing of a freeze-sensitive product: shown as severe. */
   severe: boolean;
+  /**
+   * The zone of the site the event happened on, whose clock its times are shown on: the fridge's site, else the one
+   * site all its lots are on; null when they are on several (a recall), shown on the reader's own clock.
+   */
+  timeZone: string | null;
   /** The fridge readings behind an excursion or freeze hold, kept even when a recompute replaced the fridge's record. */
   exposureEvent: ExposureEventView | null;
   troubleshooting: TroubleshootingView | null;

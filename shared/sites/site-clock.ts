@@ -1,11 +1,13 @@
 // Instants on a site's own clock: a check done at 08:30 at the farm reads 08:30 wherever the reader's browser is.
 // Only Intl, so the client can use it without a date library. Building a formatter costs far more than using one
 // (it loads the zone's rules): one per locale, zone and style, kept.
-export type SiteTimeStyle = 'medium' | 'time';
+export type SiteTimeStyle = 'medium' | 'short' | 'time';
 
 const styles: Record<SiteTimeStyle, Intl.DateTimeFormatOptions> = {
   /** "Dec 4, 2026, 8:30 AM CST" */
   medium: { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short' },
+  /** "12/4/26, 8:30 AM CST" */
+  short: { year: '2-digit', month: 'numeric', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short' },
   /** "8:30 AM CST" */
   time: { hour: 'numeric', minute: '2-digit', timeZoneName: 'short' },
 };
@@ -60,4 +62,16 @@ export function siteWallTimeToInstant(wall: string, timeZone: string): Date | nu
   const candidates = [-DAY_MS, DAY_MS].map((side) => wallAsUtc - zoneOffsetMs(wallAsUtc + side, timeZone));
   const readsBack = candidates.filter((instant) => instant + zoneOffsetMs(instant, timeZone) === wallAsUtc);
   return new Date(readsBack.length ? Math.min(...readsBack) : candidates[0]!);
+}
+
+const pad = (n: number) => String(n).padStart(2, '0');
+
+/**
+ * The instant as the site's wall clock reads it, "2026-12-04T08:30", as a datetime-local field takes it: the inverse of
+ * `siteWallTimeToInstant` (seconds dropped), so a form can show a stored or current time on the site's clock.
+ */
+export function siteWallTime(instant: Date | string | number, timeZone: string): string {
+  const ms = new Date(instant).getTime();
+  const wall = new Date(Math.floor(ms / 1000) * 1000 + zoneOffsetMs(ms, timeZone));
+  return `${wall.getUTCFullYear()}-${pad(wall.getUTCMonth() + 1)}-${pad(wall.getUTCDate())}T${pad(wall.getUTCHours())}:${pad(wall.getUTCMinutes())}`;
 }

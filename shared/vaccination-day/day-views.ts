@@ -44,6 +44,8 @@ export interface RunView {
   status: string;
   siteId: number;
   siteName: string;
+  /** The site's zone: the run's times (started, mixed, use by, signed, vials out) are shown and typed on its clock. */
+  timeZone: string;
   houseName: string;
   flockId: number;
   flockName: string;

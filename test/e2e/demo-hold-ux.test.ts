@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { expect } from 'chai';
 import { PasswordHasher } from '../../api/auth/password-hasher.js';
-import { Lot, Shipment } from '../../database/models/index.js';
+import { Lot, Shipment, Site } from '../../database/models/index.js';
 import { demoAccounts, seedDemoScenario } from '../../database/seeders/demo-scenario.js';
 import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
@@ -47,8 +47,9 @@ describe('the demo’s arrival hold in Chromium', function () {
       const hold = page.getByRole('article', { name: 'Arrival hold' });
       await hold.waitFor();
       const opened = await hold.getByText(/^Opened /).innerText();
-      // The page's medium date, in the browser's zone (UTC here): "Dec 1, 2026, 6:49:18 PM".
-      const day = (ms: number) => new Date(ms).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+      // The page's medium date on the lot's site's clock (where the delivery arrived): "Dec 1, 2026, 12:49 PM CST".
+      const zone = (await Site.findByPk(warm.siteId))!.timeZone;
+      const day = (ms: number) => new Date(ms).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: zone });
       expect(opened).to.contain(`Opened ${day(warm.arrivedAt.getTime())},`);
       expect(opened).to.not.contain(day(Date.now()));
       await hold.scrollIntoViewIfNeeded();

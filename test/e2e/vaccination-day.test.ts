@@ -90,7 +90,8 @@ describe('the vaccination day in Chromium (phone)', () => {
     await page.getByRole('img', { name: 'Water-sensitive paper from the trial' }).waitFor();
     expect(await page.getByRole('img', { name: 'Water-sensitive paper from the trial' }).evaluate((img: HTMLImageElement) => img.naturalWidth)).to.be.greaterThan(0);
     await page.getByRole('button', { name: 'Start the vaccination' }).click();
-    await page.getByText(/Started \d\d:\d\d UTC/).waitFor();
+    // On the site's clock, named (the browser is in the site's zone here, Chicago: CST or CDT).
+    await page.getByText(/Started \d{1,2}:\d\d\s[AP]M\sC[SD]T/).waitFor();
 
     await page.getByLabel('Scan or type the barcode').fill(`(01)${gtin}(10)HV0999`);
     await page.getByLabel('Vials', { exact: true }).fill('1');

@@ -43,6 +43,8 @@ describe('automatic excursion and freeze holds', () => {
     expect(queue).to.have.length(1);
     expect(queue[0].title).to.match(/above product range 2–6 °C \(inside the fridge's alarm range: product range only\)/);
     expect(queue[0].exposureEvent).to.include({ minutes: 20, fridgeAlarmed: false });
+    // Its times are shown on the clock of the fridge's site (createSite's default zone).
+    expect(queue[0].timeZone).to.equal('America/Chicago');
   });
 
   it('holds a freeze-sensitive lot for freezing (severe) at 0 °C, but not a lot whose product does not mind freezing', async () => {

@@ -14,7 +14,7 @@ describe('recalls', () => {
 
   it('holds every lot of that number on every site (any letter case), as one event in the queue', async () => {
     const north = await createSite('NOR');
-    const south = await createSite('SOU');
+    const south = await createSite('SOU', 'America/Denver');
     const product = await createProduct();
     const a = await stockLot(await createSiteFridge(north), await createPresentation(product, 1000), 4, '2030-01-31', { lotNumber: 'ab-123' });
     const b = await stockLot(await createSiteFridge(south), await createPresentation(product, 500), 6, '2030-01-31', { lotNumber: 'AB-123' });
@@ -28,10 +28,13 @@ describe('recalls', () => {
     expect(queue).to.have.length(1);
     expect(queue[0]).to.include({ cause: 'recall', title: 'Recall of lot Ab-123', vials: 10, doses: 7000 });
     expect(queue[0].recall).to.include({ reason: 'Manufacturer notice of low potency', placedBy: vet.user.name });
+    // Lots on two sites zones apart: no one site's clock (the page shows the reader's own).
+    expect(queue[0].timeZone).to.equal(null);
     // A veterinarian of one site sees only that site's lot of the recall.
     const northVet = await signInAs(['veterinarian'], [north]);
     const seen = (await northVet.agent.get('/api/holds/queue').expect(200)).body.items;
     expect(seen[0].lots.map((l: { lotId: number }) => l.lotId)).to.deep.equal([a.id]);
+    expect(seen[0].timeZone, 'its one site’s clock').to.equal(north.timeZone);
   });
 
   it('may be limited to one product; a number with no lot is a 422 naming lotNumber; only veterinarians recall', async () => {

@@ -25,7 +25,8 @@ describe('lots list and lot page', () => {
   beforeEach(async () => {
     await resetDatabase();
     north = await createSite('NORTH');
-    south = await createSite('SOUTH');
+    // Another zone than the north's, so each side's clock is told apart.
+    south = await createSite('SOUTH', 'America/Denver');
     northFridge = await createFridge(north);
     secondNorthFridge = await createFridge(north);
     southFridge = await createFridge(south);
@@ -110,6 +111,8 @@ describe('lots list and lot page', () => {
     const options = (await storage.agent.get('/api/lots/filters').expect(200)).body;
     expect(options.sites.map((s: { id: number }) => s.id)).to.deep.equal([north.id]);
     expect(options.fridges.map((f: { id: number }) => f.id).sort()).to.deep.equal([northFridge.id, secondNorthFridge.id].sort());
+    // Each with its site's zone: a transfer's arrival is typed on the receiving fridge's site's clock.
+    expect(options.fridges.map((f: { timeZone: string }) => f.timeZone)).to.deep.equal([north.timeZone, north.timeZone]);
     expect(options.products.map((p: { name: string }) => p.name)).to.deep.equal(['Alpha live spray', 'Beta wing-web']);
   });
 
@@ -156,9 +159,13 @@ describe('lots list and lot page', () => {
     );
     const page = (await storage.agent.get(`/api/lots/${later.id}`).expect(200)).body;
     expect(page.locations.map((l: { siteName: string; vials: number; fridgeId: number | null }) => [l.fridgeId, l.siteName, l.vials])).to.deep.equal([[northFridge.id, north.name, 20], [null, 'Another site', 10]]);
-    expect(page.history[0].to).to.deep.equal({ fridgeId: null, fridgeCode: '', siteId: null, siteName: 'Another site' });
+    expect(page.history[0].to).to.deep.equal({ fridgeId: null, fridgeCode: '', siteId: null, siteName: 'Another site', timeZone: null });
+    // The lot's times are on the clock of the site it reached this user at; each movement's side carries its own.
+    expect(page.timeZone).to.equal(north.timeZone);
+    expect(page.history[0].from.timeZone).to.equal(north.timeZone);
     const full = (await both.agent.get(`/api/lots/${later.id}`).expect(200)).body;
     expect(full.history[0].to.fridgeId).to.equal(southFridge.id);
+    expect(full.history[0].to.timeZone).to.equal(south.timeZone);
   });
 
   it('lists the lot\'s open planned transfers to a user who sees both sites', async () => {

@@ -44,6 +44,8 @@ describe('vaccination day: day sheet and readiness', () => {
     const refused = await lead.agent.post(`${url}/start`).set('X-XSRF-TOKEN', lead.csrf).send({});
     expect(refused.status).to.equal(409);
     expect(refused.body.error.fields[0].field).to.equal('checks');
+    // The run carries its site's zone: its times are shown and typed on the farm's clock.
+    expect((await lead.agent.get(url).expect(200)).body.timeZone).to.equal(site.timeZone);
 
     const firstVisitAt = new Date(Date.now() + 3_600_000).toISOString();
     const fiveHoursBefore = new Date(Date.now() - 4 * 3_600_000).toISOString();

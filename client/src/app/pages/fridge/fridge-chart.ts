@@ -1,8 +1,9 @@
 // The fridge's temperature chart for a day, week, month, year or any range, with the allowed band and excursions shaded.
 // The review embeds it too: a fixed window around one event, shaded with the product's range instead of the fridge's.
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked, viewChild } from '@angular/core';
+// Times (axis, tooltips, table, date fields) are on the site's clock, the axis titled with the zone's name.
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, effect, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatExpansionModule } from '@angular/material/expansion';
@@ -15,14 +16,21 @@ import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import type { Chart, ChartConfiguration, Plugin } from 'chart.js';
 import { BaseChartDirective, provideCharts, withDefaultRegisterables } from 'ng2-charts';
 import type { ExcursionView } from '@shared/fridges/excursion-view.js';
+import { siteTimeText, siteWallTime, siteWallTimeToInstant, siteZoneName } from '@shared/sites/site-clock.js';
 import { AuthStore } from '../../core/auth/auth-store';
+import { SiteTimePipe, readerTimeZone } from '../../shared/sites/site-time-pipe';
 import { FridgesApi } from '../fridges/fridges-api';
 import { chartColors } from './chart-colors';
 import { rangeEnding, shiftRange, spanLabels, type ChartRange, type RangeSpan } from './chart-range';
 import { chartSeries, chartTableRows, type ChartTableRow } from './chart-rows';
 
-const timeLabel = new Intl.DateTimeFormat(undefined, { month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
-const dayLabel = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
+/** The axis's and summary's labels on the zone's clock (built once per zone: building a formatter is the costly part). */
+function labelsFor(timeZone: string) {
+  return {
+    time: new Intl.DateTimeFormat(undefined, { month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit', timeZone }),
+    day: new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric', timeZone }),
+  };
+}
 
 /** What the chart needs of an excursion: its span. */
 export type ChartExcursion = Pick<ExcursionView, 'start' | 'end'>;
@@ -35,6 +43,11 @@ export interface ChartBand {
 }
 
 let nextChartId = 0;
+
+/** "2026-12-04" → "2026-12-05", on the calendar alone. */
+function nextDay(day: string): string {
+  return new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
+}
 
 /** Draws each excursion's span as a shaded column behind the lines. */
 function excursionShading(excursions: () => ChartExcursion[], color: string): Plugin<'line'> {
@@ -56,7 +69,7 @@ function excursionShading(excursions: () => ChartExcursion[], color: string): Pl
 
 @Component({
   selector: 'vy-fridge-chart',
-  imports: [BaseChartDirective, MatButtonToggleModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatExpansionModule, MatTableModule, MatPaginatorModule, MatProgressBarModule, DatePipe, DecimalPipe],
+  imports: [BaseChartDirective, MatButtonToggleModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatExpansionModule, MatTableModule, MatPaginatorModule, MatProgressBarModule, DecimalPipe, SiteTimePipe],
   providers: [provideCharts(withDefaultRegisterables())],
   templateUrl: './fridge-chart.html',
   styleUrl: './fridge-chart.scss',
@@ -64,6 +77,8 @@ function excursionShading(excursions: () => ChartExcursion[], color: string): Pl
 })
 export class FridgeChart {
   readonly fridgeId = input.required<number>();
+  /** The fridge's site's zone: every time on the chart is on its clock (none given: the reader's own). */
+  readonly timeZone = input<string | null>(null);
   readonly excursions = input<ChartExcursion[]>([]);
   /** The newest reading: the first range shown ends there, so a fridge without recent data still shows its last week. */
   readonly endAt = input<string | null>(null);
@@ -81,6 +96,16 @@ export class FridgeChart {
   private readonly api = inject(FridgesApi);
   private readonly auth = inject(AuthStore);
   private readonly colors = chartColors();
+  private readonly locale = inject(LOCALE_ID);
+  protected readonly zone = computed(() => this.timeZone() || readerTimeZone());
+  private readonly labels = computed(() => labelsFor(this.zone()));
+  /** "CST"; "CST, CDT" when the range crosses a clock change. */
+  private readonly zoneNames = computed(() => {
+    const { from, to } = this.range();
+    return [...new Set([siteZoneName(from, this.zone()), siteZoneName(to, this.zone())])].join(', ');
+  });
+  /** The axis's and the table's time heading: "Time at the site (CST)". */
+  protected readonly axisTitle = computed(() => `${this.timeZone() ? 'Time at the site' : 'Your time'} (${this.zoneNames()})`);
   protected readonly spans: RangeSpan[] = ['day', 'week', 'month', 'year', 'custom'];
   protected readonly spanLabels = spanLabels;
   protected readonly unit = this.auth.displayUnit;
@@ -97,13 +122,14 @@ export class FridgeChart {
   protected readonly summary = computed(() => {
     const data = this.data.value();
     if (!data) return 'Loading the chart.';
+    const { day: dayLabel, time: timeLabel } = this.labels();
     const count = data.primary.points.length + data.primary.buckets.length;
     if (!count) return `No readings between ${dayLabel.format(this.range().from)} and ${dayLabel.format(this.range().to)}.`;
     const kind = data.bucketMinutes ? `lowest and highest per ${data.bucketMinutes >= 60 ? `${data.bucketMinutes / 60} h` : `${data.bucketMinutes} min`}` : 'every reading';
     const band = this.band();
     const bandText = band ? `; the shaded band is the ${band.label.toLowerCase()}` : '';
     const label = this.range().to.getTime() - this.range().from.getTime() > 2 * 86_400_000 ? dayLabel : timeLabel;
-    return `Temperatures in °${this.unit()} from ${label.format(this.range().from)} to ${label.format(this.range().to)}, ${kind}; shaded columns are excursions${bandText}.`;
+    return `Temperatures in °${this.unit()} from ${label.format(this.range().from)} to ${label.format(this.range().to)} (${this.timeZone() ? "the site's clock" : 'your clock'}, ${this.zoneNames()}), ${kind}; shaded columns are excursions${bandText}.`;
   });
 
   protected readonly config = computed<ChartConfiguration<'line'>>(() => {
@@ -111,6 +137,9 @@ export class FridgeChart {
     const unit = this.unit();
     const range = this.range();
     const c = this.colors;
+    const { day: dayLabel, time: timeLabel } = this.labels();
+    const zone = this.zone();
+    const axisTitle = this.axisTitle();
     const s = data ? chartSeries(data, unit, this.band()) : { primaryPoints: [], highs: [], lows: [], backup: [], low: 0, high: 0 };
     const band = data ? [{ x: range.from.getTime(), y: s.high }, { x: range.to.getTime(), y: s.high }] : [];
     const datasets: ChartConfiguration<'line'>['data']['datasets'] = [
@@ -135,10 +164,10 @@ export class FridgeChart {
         interaction: { mode: 'nearest', intersect: false },
         plugins: {
           legend: { labels: { color: c.text, filter: (item) => item.text !== 'Lowest' } },
-          tooltip: { callbacks: { title: (items) => (items[0] ? timeLabel.format(items[0].parsed.x ?? 0) : ''), label: (item) => `${item.dataset.label}: ${item.parsed.y} °${unit}` } },
+          tooltip: { callbacks: { title: (items) => (items[0] ? siteTimeText(items[0].parsed.x ?? 0, zone, 'medium', this.locale) : ''), label: (item) => `${item.dataset.label}: ${item.parsed.y} °${unit}` } },
         },
         scales: {
-          x: { type: 'linear', min: range.from.getTime(), max: range.to.getTime(), ticks: { color: c.text, maxTicksLimit: 8, callback: (v) => (range.to.getTime() - range.from.getTime() > 3 * 86_400_000 ? dayLabel : timeLabel).format(Number(v)) }, grid: { color: c.grid } },
+          x: { type: 'linear', min: range.from.getTime(), max: range.to.getTime(), ticks: { color: c.text, maxTicksLimit: 8, callback: (v) => (range.to.getTime() - range.from.getTime() > 3 * 86_400_000 ? dayLabel : timeLabel).format(Number(v)) }, title: { display: true, text: axisTitle, color: c.text }, grid: { color: c.grid } },
           // The allowed band always shows in full, with a little room either side.
           y: { suggestedMin: s.low - (s.high - s.low) * 0.15, suggestedMax: s.high + (s.high - s.low) * 0.15, title: { display: true, text: `°${unit}`, color: c.text }, ticks: { color: c.text }, grid: { color: c.grid } },
         },
@@ -196,19 +225,22 @@ export class FridgeChart {
     this.range.update((r) => shiftRange(r, direction));
   }
 
+  /** A picked day starts at the site's midnight. */
   protected setCustom(which: 'from' | 'to', value: string): void {
     this.moved = true;
     this.onWindow.set(false);
-    const date = new Date(`${value}T00:00`);
-    if (Number.isNaN(date.getTime())) return;
+    const date = siteWallTimeToInstant(`${value}T00:00`, this.zone());
+    if (!date) return;
     this.range.update((r) => {
-      const next = { ...r, span: 'custom' as const, [which]: which === 'to' ? new Date(date.getTime() + 86_400_000) : date };
+      // The day after's midnight, not 24 h later: a day of a clock change lasts 23 or 25 hours.
+      const dayAfter = siteWallTimeToInstant(`${nextDay(value)}T00:00`, this.zone())!;
+      const next = { ...r, span: 'custom' as const, [which]: which === 'to' ? dayAfter : date };
       return next.to > next.from ? next : r;
     });
   }
 
+  /** The site's calendar day of the range's start, or of its last moment. */
   protected dateInput(date: Date, which: 'from' | 'to'): string {
-    const d = which === 'to' ? new Date(date.getTime() - 1) : date;
-    return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+    return siteWallTime(which === 'to' ? date.getTime() - 1 : date, this.zone()).slice(0, 10);
   }
 }

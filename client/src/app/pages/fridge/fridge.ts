@@ -1,7 +1,7 @@
 // One fridge: its chart, excursions and gaps, upload history, loggers and certificates, checks and monthly record.
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -30,7 +30,7 @@ import { CountDueNote } from '../stock-count/count-due-note';
 
 @Component({
   selector: 'vy-fridge',
-  imports: [FridgeChart, CountDueNote, MatButtonModule, MatIconModule, MatTableModule, MatProgressBarModule, MatFormFieldModule, MatInputModule, RouterLink, DatePipe, DecimalPipe, SiteTimePipe, TemperaturePipe],
+  imports: [FridgeChart, CountDueNote, MatButtonModule, MatIconModule, MatTableModule, MatProgressBarModule, MatFormFieldModule, MatInputModule, RouterLink, DecimalPipe, SiteTimePipe, TemperaturePipe],
   templateUrl: './fridge.html',
   styleUrl: './fridge.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,13 +1,13 @@
 // Home card for storage staff (admins and veterinarians too): fridges not checked today, open excursions, stale data, calibrations and stock counts due.
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { EMPTY } from 'rxjs';
 import { AuthStore } from '../../core/auth/auth-store';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { FridgesApi } from '../fridges/fridges-api';
 import { countDueReasonLabels } from '@shared/lots/count-due.js';
@@ -15,7 +15,7 @@ import { LotsApi, type FridgeCountDue } from '../../shared/lots/lots-api';
 
 @Component({
   selector: 'vy-storage-card',
-  imports: [MatCardModule, MatButtonModule, MatIconModule, RouterLink, DatePipe, TemperaturePipe],
+  imports: [MatCardModule, MatButtonModule, MatIconModule, RouterLink, SiteTimePipe, TemperaturePipe],
   template: `
     @if (visible()) {
       <mat-card appearance="outlined">
@@ -40,7 +40,7 @@ import { LotsApi, type FridgeCountDue } from '../../shared/lots/lots-api';
               <h3>Undecided excursions</h3>
               <ul>
                 @for (e of o.openExcursions.slice(0, 5); track e.id) {
-                  <li><a [routerLink]="['/fridges', e.fridgeId]">{{ e.fridgeCode }}</a> · {{ e.kind === 'high' ? 'too warm' : 'too cold' }}, peak {{ e.peakC | temperature }}, {{ e.start | date: 'short' }}</li>
+                  <li><a [routerLink]="['/fridges', e.fridgeId]">{{ e.fridgeCode }}</a> · {{ e.kind === 'high' ? 'too warm' : 'too cold' }}, peak {{ e.peakC | temperature }}, {{ e.start | siteTime: zoneOf(e.fridgeId) : 'short' }}</li>
                 }
               </ul>
               <p class="advice">Keep exposed vaccine at proper temperature, marked "do not use"; do not discard it unless directed. The veterinarian decides.</p>
@@ -49,7 +49,7 @@ import { LotsApi, type FridgeCountDue } from '../../shared/lots/lots-api';
               <h3>No recent data</h3>
               <ul>
                 @for (f of stale(); track f.id) {
-                  <li><a [routerLink]="['/fridges', f.id]">{{ f.code }}</a> · newest reading {{ f.newestReadingAt ? (f.newestReadingAt | date: 'short') : 'none yet' }}</li>
+                  <li><a [routerLink]="['/fridges', f.id]">{{ f.code }}</a> · newest reading {{ f.newestReadingAt ? (f.newestReadingAt | siteTime: f.timeZone : 'short') : 'none yet' }}</li>
                 }
               </ul>
             }
@@ -106,6 +106,11 @@ export class StorageCard {
   protected readonly overview = toSignal(this.auth.hasRole('admin', 'storage', 'veterinarian') ? inject(FridgesApi).overview() : EMPTY);
   /** Counts due monthly and after each delivery into the fridge (common practice for vaccine stock). */
   protected readonly countsDue = toSignal(this.auth.hasRole('admin', 'storage', 'veterinarian') ? inject(LotsApi).countsDue() : EMPTY);
+  /** Each fridge's site zone: times of a fridge's events are shown on its site's clock. */
+  private readonly zones = computed(() => new Map((this.overview()?.fridges ?? []).map((f) => [f.id, f.timeZone])));
+  protected zoneOf(fridgeId: number): string | undefined {
+    return this.zones().get(fridgeId);
+  }
   protected readonly unchecked = computed(() => (this.overview()?.fridges ?? []).filter((f) => f.checksToday < f.checksNeeded));
   protected readonly stale = computed(() => (this.overview()?.fridges ?? []).filter((f) => f.noRecentData));
   protected readonly allClear = computed(() => {

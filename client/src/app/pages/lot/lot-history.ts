@@ -1,8 +1,9 @@
 // Where a lot's vials have been: every movement, newest first, with the fridges on each side and who recorded it.
+// Each time is on the clock of the site it happened at: arrival at the receiving side's, leaving at the giving side's.
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import { DatePipe } from '@angular/common';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import type { LotPageMovement } from '@shared/lots/lot-page.js';
 import type { MovementKind } from '@shared/lots/movement-kinds.js';
 
@@ -17,7 +18,7 @@ const kindLabels: Record<MovementKind, string> = {
 
 @Component({
   selector: 'vy-lot-history',
-  imports: [MatTableModule, DatePipe, RouterLink],
+  imports: [MatTableModule, RouterLink, SiteTimePipe],
   template: `
     <section aria-labelledby="history-heading">
       <h2 id="history-heading">Where its vials have been</h2>
@@ -26,8 +27,8 @@ const kindLabels: Record<MovementKind, string> = {
           <ng-container matColumnDef="at">
             <th mat-header-cell *matHeaderCellDef>When</th>
             <td mat-cell *matCellDef="let m">
-              {{ m.at | date: 'medium' }}
-              @if (m.leftAt && m.leftAt !== m.at) { <div class="muted">left {{ m.leftAt | date: 'shortTime' }}</div> }
+              {{ m.at | siteTime: atZone(m) }}
+              @if (m.leftAt && m.leftAt !== m.at) { <div class="muted">left {{ m.leftAt | siteTime: leftZone(m) : 'time' }}</div> }
             </td>
           </ng-container>
           <ng-container matColumnDef="kind">
@@ -72,7 +73,18 @@ const kindLabels: Record<MovementKind, string> = {
 })
 export class LotHistory {
   readonly history = input.required<LotPageMovement[]>();
+  /** The lot's site's zone, for a side on a site the user does not see. */
+  readonly timeZone = input.required<string>();
   protected readonly columns = ['at', 'kind', 'vials', 'from', 'to', 'reason'];
+
+  /** Vials arrive (or are counted, issued, discarded) at the receiving side, else at the side they left. */
+  protected atZone(m: LotPageMovement): string {
+    return m.to?.timeZone ?? m.from?.timeZone ?? this.timeZone();
+  }
+
+  protected leftZone(m: LotPageMovement): string {
+    return m.from?.timeZone ?? this.timeZone();
+  }
 
   protected kindLabel(m: LotPageMovement): string {
     if (m.kind === 'adjust') return m.to ? 'Count adjustment (found)' : 'Count adjustment (missing)';

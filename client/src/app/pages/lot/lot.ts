@@ -1,7 +1,7 @@
 // One lot: its status and holds (with the do-not-use tag), where its vials are and have been, exposure, flocks.
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -14,6 +14,7 @@ import type { LotPage, LotPagePlannedTransfer } from '@shared/lots/lot-page.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { LotStatusChip } from '../../shared/lots/lot-status-chip';
 import { LotsApi, type TransferResult } from '../../shared/lots/lots-api';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { DiscardDialog, type DiscardDialogData } from './discard-dialog';
 import { LotHistory } from './lot-history';
@@ -21,7 +22,7 @@ import { TransferDialog, type TransferDialogData } from './transfer-dialog';
 
 @Component({
   selector: 'vy-lot',
-  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DatePipe, DecimalPipe, TemperaturePipe, LotStatusChip, LotHistory],
+  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DecimalPipe, SiteTimePipe, TemperaturePipe, LotStatusChip, LotHistory],
   templateUrl: './lot.html',
   styleUrl: './lot.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,5 +1,6 @@
-// Moves vials of a lot to another fridge (on this or another site), with the times they left and arrived.
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+// Moves vials of a lot to another fridge (on this or another site), with the times they left and arrived: the leaving
+// time on the giving fridge's site's clock, the arrival on the receiving one's (two farms may be zones apart).
+import { ChangeDetectionStrategy, Component, computed, effect, inject, signal, untracked } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -12,6 +13,7 @@ import type { LotFilterOptions } from '@shared/lots/lot-list.js';
 import type { LotPage, LotPagePlannedTransfer } from '@shared/lots/lot-page.js';
 import { applyServerErrors, controlMessage } from '../../core/forms/server-errors';
 import { LotsApi, type TransferResult } from '../../shared/lots/lots-api';
+import { siteClockHint } from '../../shared/sites/site-clock-hint';
 import { instantFromInput, localInputValue } from './local-time';
 
 export interface TransferDialogData {
@@ -61,11 +63,13 @@ export interface TransferDialogData {
           <mat-form-field>
             <mat-label>Left the fridge at</mat-label>
             <input matInput type="datetime-local" formControlName="leftAt" required />
+            <mat-hint>{{ leftHint() }}</mat-hint>
             @if (form.controls.leftAt.invalid) { <mat-error>{{ message(form.controls.leftAt) }}</mat-error> }
           </mat-form-field>
           <mat-form-field>
             <mat-label>Arrived at</mat-label>
             <input matInput type="datetime-local" formControlName="at" required />
+            <mat-hint>{{ atHint() }}</mat-hint>
             @if (form.controls.at.invalid) { <mat-error>{{ message(form.controls.at) }}</mat-error> }
           </mat-form-field>
         </div>
@@ -106,17 +110,40 @@ export class TransferDialog {
       ? 'This product has no recorded time-out limit: any time out of a fridge puts the lot on hold for the veterinarian.'
       : `Out of a fridge longer than ${this.data.lot.product.timeOutLimitMinutes} min puts the lot on hold for the veterinarian.`;
 
-  private readonly now = localInputValue(new Date());
+  /** When the dialog opened: the times' first value, on whichever clock the chosen fridges' sites keep. */
+  private readonly openedAt = new Date();
+  private readonly firstFrom = this.sources.length === 1 ? this.sources[0]! : null;
   protected readonly form = inject(NonNullableFormBuilder).group({
-    fromFridgeId: [this.sources.length === 1 ? this.sources[0]!.fridgeId! : (null as number | null), Validators.required],
+    fromFridgeId: [this.firstFrom?.fridgeId ?? (null as number | null), Validators.required],
     toFridgeId: [null as number | null, Validators.required],
     vials: [this.planned?.vials ?? 1, [Validators.required, Validators.min(1)]],
-    leftAt: [this.now, Validators.required],
-    at: [this.now, Validators.required],
+    leftAt: [localInputValue(this.openedAt, this.firstFrom?.timeZone ?? this.data.lot.timeZone), Validators.required],
+    at: [localInputValue(this.openedAt, this.firstFrom?.timeZone ?? this.data.lot.timeZone), Validators.required],
     notes: [''],
   });
   private readonly from = toSignal(this.form.controls.fromFridgeId.valueChanges, { initialValue: this.form.controls.fromFridgeId.value });
   protected readonly destinations = computed(() => this.data.fridges.filter((f) => f.id !== this.from() && (!this.planned || f.siteId === this.planned.toSiteId)));
+  private readonly to = toSignal(this.form.controls.toFridgeId.valueChanges, { initialValue: this.form.controls.toFridgeId.value });
+  private readonly leftTyped = toSignal(this.form.controls.leftAt.valueChanges, { initialValue: this.form.controls.leftAt.value });
+  private readonly atTyped = toSignal(this.form.controls.at.valueChanges, { initialValue: this.form.controls.at.value });
+  /** The giving fridge's site's zone (the lot's own until one is chosen). */
+  private readonly fromZone = computed(() => this.sources.find((s) => s.fridgeId === this.from())?.timeZone ?? this.data.lot.timeZone);
+  /** The receiving fridge's site's zone (the giving one's until one is chosen). */
+  private readonly toZone = computed(() => this.data.fridges.find((f) => f.id === this.to())?.timeZone ?? this.fromZone());
+  protected readonly leftHint = computed(() => siteClockHint(this.leftTyped(), this.fromZone(), "the sending site's clock"));
+  protected readonly atHint = computed(() => siteClockHint(this.atTyped(), this.toZone(), "the receiving site's clock"));
+
+  constructor() {
+    // A time nobody typed follows the clock of the fridge chosen: it stays the moment the dialog opened.
+    effect(() => {
+      const zone = this.fromZone();
+      untracked(() => this.form.controls.leftAt.pristine && this.form.controls.leftAt.setValue(localInputValue(this.openedAt, zone)));
+    });
+    effect(() => {
+      const zone = this.toZone();
+      untracked(() => this.form.controls.at.pristine && this.form.controls.at.setValue(localInputValue(this.openedAt, zone)));
+    });
+  }
 
   protected async save(): Promise<void> {
     if (this.form.invalid) {
@@ -128,7 +155,7 @@ export class TransferDialog {
     this.formError.set(null);
     try {
       const result = await firstValueFrom(
-        this.api.transfer(this.data.lot.id, { ...value, fromFridgeId: value.fromFridgeId!, toFridgeId: value.toFridgeId!, leftAt: instantFromInput(value.leftAt), at: instantFromInput(value.at), plannedTransferId: this.planned?.id ?? null }),
+        this.api.transfer(this.data.lot.id, { ...value, fromFridgeId: value.fromFridgeId!, toFridgeId: value.toFridgeId!, leftAt: instantFromInput(value.leftAt, this.fromZone()), at: instantFromInput(value.at, this.toZone()), plannedTransferId: this.planned?.id ?? null }),
       );
       this.dialogRef.close(result);
     } catch (error) {

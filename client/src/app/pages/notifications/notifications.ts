@@ -1,5 +1,5 @@
 // The user's notifications, newest first: what was held or decided, with a way to open it and mark it read.
-import { DatePipe } from '@angular/common';
+// Times are the reader's own clock (named): a notification is a message to them, and its event's lots may lie on several sites.
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
@@ -7,10 +7,11 @@ import { MatIconModule } from '@angular/material/icon';
 import { Router } from '@angular/router';
 import type { NotificationView } from '@shared/notifications/notification-view.js';
 import { NotificationsStore } from '../../core/notifications/notifications-store';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 
 @Component({
   selector: 'vy-notifications',
-  imports: [DatePipe, MatButtonModule, MatCardModule, MatIconModule],
+  imports: [MatButtonModule, MatCardModule, MatIconModule, SiteTimePipe],
   templateUrl: './notifications.html',
   styleUrl: './notifications.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

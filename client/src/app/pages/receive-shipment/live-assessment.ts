@@ -3,7 +3,7 @@ import { assessShipment, type ProductRangeInfo, type ShipmentAssessment } from '
 import { readExpiry } from '@shared/receiving/expiry-input.js';
 import type { ShipmentOutcome } from '@shared/receiving/arrival-checks.js';
 import type { ProductView } from '@shared/catalogue/product-schemas.js';
-import type { ShipmentFormValue } from './shipment-form';
+import { siteInstant, type ShipmentFormValue } from './shipment-form';
 
 export function rangesOf(products: ProductView[]): Map<number, ProductRangeInfo> {
   const ranges = new Map<number, ProductRangeInfo>();
@@ -15,13 +15,14 @@ export function rangesOf(products: ProductView[]): Map<number, ProductRangeInfo>
   return ranges;
 }
 
-export function liveAssessment(value: ShipmentFormValue, products: ProductView[], storeWithinMinutes: number, outcome: ShipmentOutcome): ShipmentAssessment {
-  const arrivedAt = value.arrivedAt ? new Date(value.arrivedAt).toISOString() : new Date().toISOString();
-  const storedAt = (local: string) => (local ? new Date(local).toISOString() : null);
+/** `timeZone`: the site's, whose clock the form's times are typed on. */
+export function liveAssessment(value: ShipmentFormValue, products: ProductView[], storeWithinMinutes: number, outcome: ShipmentOutcome, timeZone: string): ShipmentAssessment {
+  const instant = (wall: string) => siteInstant(wall, timeZone);
+  const arrivedAt = instant(value.arrivedAt) ?? new Date().toISOString();
   return assessShipment(
     {
       arrivedAt,
-      shippedAt: value.shippedAt ? new Date(value.shippedAt).toISOString() : null,
+      shippedAt: instant(value.shippedAt),
       // An unanswered check is not a finding yet.
       checks: {
         containerIntact: value.checks.containerIntact ?? true,
@@ -36,7 +37,7 @@ export function liveAssessment(value: ShipmentFormValue, products: ProductView[]
         lotNumber: line.lotNumber || '(no lot yet)',
         expiry: readExpiry(line.expiry)?.expiry ?? '9999-12-31',
         accepted: line.accepted,
-        storedAt: storedAt(line.storedAt || value.storedAt),
+        storedAt: instant(line.storedAt || value.storedAt),
         vialsExpected: line.vialsExpected || 0,
         vialsIntact: line.vialsIntact || 0,
         vialsBroken: line.vialsBroken || 0,

@@ -1,4 +1,5 @@
 // The receiving form: mobile-first, one-handed; the draft is kept on the phone and survives a reload or a lost connection.
+// Its times are the site's clock's, typed and hinted with the zone's name, wherever the phone's clock is set.
 import { DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, Injector, OnInit, afterNextRender, computed, inject, input, signal, viewChild, viewChildren } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
@@ -21,10 +22,13 @@ import { allChecksFine, outcomeLabels, outcomes, readingPlaceLabels, readingPlac
 import { placeScan } from '@shared/receiving/place-scan.js';
 import type { PurchaseOrderView } from '@shared/receiving/purchase-order-schemas.js';
 import type { ReceivingContext } from '@shared/receiving/shipment-view.js';
+import { siteWallTime } from '@shared/sites/site-clock.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ApiError } from '../../core/http/api-error';
 import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
 import { ReceivingApi } from '../../shared/receiving/receiving-api';
+import { siteClockHint } from '../../shared/sites/site-clock-hint';
+import { readerTimeZone } from '../../shared/sites/site-time-pipe';
 import { ArrivalChecks } from './arrival-checks';
 import type { DraftPhoto } from './draft-photo-db';
 import { newDraftKey } from './draft-key';
@@ -89,6 +93,11 @@ export class ReceiveShipment implements OnInit {
   private readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
   private readonly siteId = computed(() => Number(this.site()) || 0);
   private readonly orderId = computed(() => (this.order() ? Number(this.order()) : null));
+  /** The site's zone: every time on the form is read on its clock. */
+  protected readonly timeZone = computed(() => this.context()?.timeZone ?? null);
+  protected readonly arrivedHint = computed(() => siteClockHint(this.value().arrivedAt, this.timeZone()));
+  protected readonly shippedHint = computed(() => siteClockHint(this.value().shippedAt, this.timeZone()));
+  protected readonly storedHint = computed(() => siteClockHint(this.value().storedAt, this.timeZone()));
 
   protected readonly choices = computed<PresentationChoice[]>(() =>
     this.products().flatMap((product) =>
@@ -101,7 +110,7 @@ export class ReceiveShipment implements OnInit {
   protected readonly photoItems = computed<PickedPhoto[]>(() => this.photos().map(({ id, name, url }) => ({ id, name, url })));
 
   private assess(outcome: ShipmentOutcome) {
-    return liveAssessment(this.value(), this.products(), this.context()?.storeWithinMinutes ?? 30, outcome);
+    return liveAssessment(this.value(), this.products(), this.context()?.storeWithinMinutes ?? 30, outcome, this.timeZone() ?? readerTimeZone());
   }
 
   async ngOnInit(): Promise<void> {
@@ -150,6 +159,7 @@ export class ReceiveShipment implements OnInit {
 
   private async startNew(context: ReceivingContext | null): Promise<void> {
     this.form.controls.fridgeId.setValue(context?.fridges[0]?.id ?? null);
+    this.form.controls.arrivedAt.setValue(siteWallTime(new Date(), context?.timeZone ?? readerTimeZone()));
     const orderId = this.orderId();
     if (orderId === null) return;
     try {
@@ -287,7 +297,7 @@ export class ReceiveShipment implements OnInit {
     this.sending.set(true);
     this.formError.set(null);
     try {
-      const body = toShipmentBody(this.form.getRawValue(), this.clientKey, this.outcome());
+      const body = toShipmentBody(this.form.getRawValue(), this.clientKey, this.outcome(), this.timeZone() ?? readerTimeZone());
       const shipment = await firstValueFrom(this.api.receive(this.siteId(), body, this.photos().map(({ blob, name }) => ({ blob, name }))));
       await this.drafts.discard();
       for (const photo of this.photos()) URL.revokeObjectURL(photo.url);

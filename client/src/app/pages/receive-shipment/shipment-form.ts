@@ -1,6 +1,8 @@
 // The receiving form's typed controls, and how its value becomes what the API receives.
+// Its times are typed on the site's clock ("2026-12-02T09:15" at the farm), whatever zone the phone is set to.
 import { FormArray, FormControl, FormGroup, NonNullableFormBuilder, Validators } from '@angular/forms';
 import type { IndicatorState, ReadingPlace, ShipmentOutcome } from '@shared/receiving/arrival-checks.js';
+import { siteWallTimeToInstant } from '@shared/sites/site-clock.js';
 import type { TemperatureUnit } from '@shared/temperature/index.js';
 
 export interface LineControls {
@@ -39,19 +41,14 @@ export function lineGroup(fb: NonNullableFormBuilder, value: Partial<LineValue> 
   });
 }
 
-/** "2026-12-02T09:15" in the phone's own time, as a datetime-local field shows it. */
-export function localDateTime(date = new Date()): string {
-  const shifted = new Date(date.getTime() - date.getTimezoneOffset() * 60_000);
-  return shifted.toISOString().slice(0, 16);
-}
-
 export function createShipmentForm(fb: NonNullableFormBuilder, unit: TemperatureUnit) {
   return fb.group({
     purchaseOrderId: fb.control<number | null>(null),
     supplierId: fb.control<number | null>(null),
     carrier: fb.control('', Validators.maxLength(80)),
     trackingNumber: fb.control('', Validators.maxLength(80)),
-    arrivedAt: fb.control(localDateTime(), Validators.required),
+    /** Set to now on the site's clock once the site is known (or from the draft). */
+    arrivedAt: fb.control('', Validators.required),
     shippedAt: fb.control(''),
     checks: fb.group({
       containerIntact: fb.control<boolean | null>(null, Validators.required),
@@ -74,10 +71,14 @@ export function createShipmentForm(fb: NonNullableFormBuilder, unit: Temperature
 export type ShipmentForm = ReturnType<typeof createShipmentForm>;
 export type ShipmentFormValue = ReturnType<ShipmentForm['getRawValue']>;
 
-const instant = (local: string) => (local ? new Date(local).toISOString() : null);
+/** A datetime field's value read on the site's clock, as the instant the API takes; null when empty (or unreadable). */
+export function siteInstant(wall: string, timeZone: string): string | null {
+  return wall ? (siteWallTimeToInstant(wall, timeZone)?.toISOString() ?? null) : null;
+}
 
 /** The body the API's shipment schema reads; the server checks it all again. */
-export function toShipmentBody(value: ShipmentFormValue, clientKey: string, outcome: ShipmentOutcome) {
+export function toShipmentBody(value: ShipmentFormValue, clientKey: string, outcome: ShipmentOutcome, timeZone: string) {
+  const instant = (wall: string) => siteInstant(wall, timeZone);
   return {
     clientKey,
     purchaseOrderId: value.purchaseOrderId,

@@ -11,6 +11,7 @@ import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { merge } from 'rxjs';
 import { controlMessage } from '../../core/forms/server-errors';
+import { siteClockHint } from '../../shared/sites/site-clock-hint';
 import type { LineGroup } from './shipment-form';
 
 export interface PresentationChoice {
@@ -33,6 +34,8 @@ export class ShipmentLineCard implements OnInit {
   readonly presentations = input.required<PresentationChoice[]>();
   readonly fridges = input.required<{ id: number; code: string; name: string }[]>();
   readonly refused = input(false);
+  /** The site's zone, whose clock "Went in at" is typed on. */
+  readonly timeZone = input<string | null>(null);
   readonly removed = output<void>();
   protected readonly message = controlMessage;
   private readonly presentationSelect = viewChild.required<MatSelect>('presentation');
@@ -51,6 +54,11 @@ export class ShipmentLineCard implements OnInit {
       .subscribe(() => {
         if (!c.vialsIntact.dirty) c.vialsIntact.setValue(Math.max(0, (c.vialsExpected.value || 0) - (c.vialsBroken.value || 0) - (c.vialsMissing.value || 0)));
       });
+  }
+
+  /** Read on each check: typing in the field is an event of this card, so the zone's name follows the date typed. */
+  protected storedHint(): string {
+    return siteClockHint(this.group().controls.storedAt.value, this.timeZone());
   }
 
   /** A line added by hand starts at what it is: the product and pack. */

@@ -26,13 +26,15 @@ export function eventChartBand(event: Pick<ExposureEventView, 'cause' | 'lowC' |
   selector: 'vy-review-event-chart',
   imports: [FridgeChart],
   template: `
-    <vy-fridge-chart [fridgeId]="event().fridgeId" [window]="window()" [band]="band()" [excursions]="excursions()"
+    <vy-fridge-chart [fridgeId]="event().fridgeId" [timeZone]="timeZone()" [window]="window()" [band]="band()" [excursions]="excursions()"
                      [heading]="'Fridge chart around the event, ' + event().fridgeName" [headingLevel]="3" />
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ReviewEventChart {
   readonly event = input.required<ExposureEventView>();
+  /** The fridge's site's zone: the chart's times are on its clock. */
+  readonly timeZone = input<string | null>(null);
   protected readonly window = computed(() => eventChartWindow(this.event().start, this.event().end));
   protected readonly band = computed(() => eventChartBand(this.event()));
   protected readonly excursions = computed<ChartExcursion[]>(() => [{ start: this.event().start, end: this.event().end }]);

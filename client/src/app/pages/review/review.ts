@@ -1,5 +1,5 @@
 // The veterinarian's review: every undecided hold grouped by the event behind it, and a signed decision per lot.
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -13,6 +13,7 @@ import { DecisionDialog } from './decision-dialog';
 import { RecallDialog } from './recall-dialog';
 import { ReviewEventChart } from './review-event-chart';
 import { TroubleshootingDialog, type TroubleshootingDialogData } from './troubleshooting-dialog';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { formatTemperature, TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { ReviewApi, type QueueEvent, type QueueLot } from './review-api';
 
@@ -27,7 +28,7 @@ const causeLabels: Record<string, string> = {
 
 @Component({
   selector: 'vy-review',
-  imports: [MatCardModule, MatButtonModule, MatIconModule, DatePipe, DecimalPipe, RouterLink, TemperaturePipe, ReviewEventChart],
+  imports: [MatCardModule, MatButtonModule, MatIconModule, DecimalPipe, RouterLink, SiteTimePipe, TemperaturePipe, ReviewEventChart],
   templateUrl: './review.html',
   styleUrl: './review.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -75,7 +76,7 @@ export class Review {
 
   protected fill(event: QueueEvent): void {
     if (!event.exposureEvent) return;
-    const data: TroubleshootingDialogData = { eventId: event.exposureEvent.id, title: event.title, record: event.troubleshooting, unit: this.auth.displayUnit() };
+    const data: TroubleshootingDialogData = { eventId: event.exposureEvent.id, title: event.title, record: event.troubleshooting, unit: this.auth.displayUnit(), timeZone: event.timeZone };
     this.dialog
       .open(TroubleshootingDialog, { data, width: '720px', maxWidth: '95vw' })
       .afterClosed()

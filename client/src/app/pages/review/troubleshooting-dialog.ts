@@ -1,5 +1,7 @@
 // The troubleshooting record of an excursion, filled in by storage staff: what was found, what happened, what was done.
+// Its times are typed and shown on the clock of the fridge's site.
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
@@ -8,9 +10,12 @@ import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { firstValueFrom } from 'rxjs';
 import type { TroubleshootingView } from '@shared/lots/exposure-event-view.js';
+import { siteWallTime, siteWallTimeToInstant } from '@shared/sites/site-clock.js';
 import { fromCelsius, type TemperatureUnit } from '@shared/temperature/index.js';
 import { applyServerErrors, controlMessage } from '../../core/forms/server-errors';
 import { ApiError } from '../../core/http/api-error';
+import { siteClockHint } from '../../shared/sites/site-clock-hint';
+import { readerTimeZone } from '../../shared/sites/site-time-pipe';
 import { ReviewApi } from './review-api';
 
 export interface TroubleshootingDialogData {
@@ -18,17 +23,9 @@ export interface TroubleshootingDialogData {
   title: string;
   record: TroubleshootingView | null;
   unit: TemperatureUnit;
+  /** The event's site's zone (null: the reader's own clock). */
+  timeZone: string | null;
 }
-
-/** "YYYY-MM-DDTHH:mm" on the browser's clock, as a datetime-local field shows it. */
-function localInput(iso: string | null): string {
-  if (!iso) return '';
-  const d = new Date(iso);
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
-}
-
-const toIso = (local: string) => (local ? new Date(local).toISOString() : null);
 // A number field hands the form a number (or null when empty), whatever the control was created with.
 const toNumber = (value: string | number | null) => (value === null || String(value).trim() === '' ? null : Number(value));
 
@@ -47,11 +44,16 @@ export class TroubleshootingDialog {
   protected readonly saving = signal(false);
   protected readonly formError = signal<string | null>(null);
   private readonly unit = this.data.record?.enteredUnit ?? this.data.unit;
+  private readonly zone = this.data.timeZone || readerTimeZone();
+  /** "YYYY-MM-DDTHH:mm" on the site's clock, as a datetime-local field shows it. */
+  private readonly wall = (iso: string | null) => (iso ? siteWallTime(iso, this.zone) : '');
+  private readonly toIso = (wall: string) => (wall ? (siteWallTimeToInstant(wall, this.zone)?.toISOString() ?? null) : null);
+  private readonly clock = this.data.timeZone ? "the site's clock" : 'your own clock';
   private readonly temp = (c: number | null | undefined) => (c == null ? '' : String(Number(fromCelsius(c, this.unit).toFixed(1))));
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     unit: [this.unit as TemperatureUnit],
-    foundAt: [localInput(this.data.record?.foundAt ?? null)],
+    foundAt: [this.wall(this.data.record?.foundAt ?? null)],
     foundBy: [this.data.record?.foundBy ?? ''],
     unitTemp: [this.temp(this.data.record?.unitTempC)],
     unitMin: [this.temp(this.data.record?.unitMinC)],
@@ -59,10 +61,14 @@ export class TroubleshootingDialog {
     roomTemp: [this.temp(this.data.record?.roomTempC)],
     whatHappened: [this.data.record?.whatHappened ?? ''],
     minutesSinceInRange: [this.data.record?.minutesSinceInRange == null ? '' : String(this.data.record.minutesSinceInRange)],
-    backInStorageAt: [localInput(this.data.record?.backInStorageAt ?? null)],
+    backInStorageAt: [this.wall(this.data.record?.backInStorageAt ?? null)],
     contacted: [this.data.record?.contacted ?? ''],
     preventiveAction: [this.data.record?.preventiveAction ?? ''],
   });
+  private readonly foundTyped = toSignal(this.form.controls.foundAt.valueChanges, { initialValue: this.form.controls.foundAt.value });
+  private readonly backTyped = toSignal(this.form.controls.backInStorageAt.valueChanges, { initialValue: this.form.controls.backInStorageAt.value });
+  protected readonly foundHint = () => siteClockHint(this.foundTyped(), this.zone, this.clock);
+  protected readonly backHint = () => siteClockHint(this.backTyped(), this.zone, this.clock);
 
   protected async save(): Promise<void> {
     const v = this.form.getRawValue();
@@ -71,7 +77,7 @@ export class TroubleshootingDialog {
     try {
       await firstValueFrom(this.api.saveTroubleshooting(this.data.eventId, {
         unit: v.unit,
-        foundAt: toIso(v.foundAt),
+        foundAt: this.toIso(v.foundAt),
         foundBy: v.foundBy,
         unitTemp: toNumber(v.unitTemp),
         unitMin: toNumber(v.unitMin),
@@ -79,7 +85,7 @@ export class TroubleshootingDialog {
         roomTemp: toNumber(v.roomTemp),
         whatHappened: v.whatHappened,
         minutesSinceInRange: toNumber(v.minutesSinceInRange),
-        backInStorageAt: toIso(v.backInStorageAt),
+        backInStorageAt: this.toIso(v.backInStorageAt),
         contacted: v.contacted,
         preventiveAction: v.preventiveAction,
       }));

@@ -1,5 +1,4 @@
 // One received shipment: its checks, lots (with any hold), photos, findings, and the discrepancy report.
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -13,11 +12,12 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { HoldNotice } from '../../shared/receiving/hold-notice';
 import { OutcomeChip } from '../../shared/receiving/outcome-chip';
 import { ReceivingApi } from '../../shared/receiving/receiving-api';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 
 @Component({
   selector: 'vy-shipment-page',
-  imports: [MatButtonModule, MatIconModule, RouterLink, DatePipe, OutcomeChip, HoldNotice, TemperaturePipe],
+  imports: [MatButtonModule, MatIconModule, RouterLink, OutcomeChip, HoldNotice, SiteTimePipe, TemperaturePipe],
   templateUrl: './shipment-page.html',
   styleUrl: './shipment-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

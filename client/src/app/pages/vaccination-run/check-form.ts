@@ -1,4 +1,5 @@
 // One readiness check's form: the statements to confirm, or the 12-hour visits, or the expected temperature.
+// A visit's time is typed on this site's clock (the crew is here), hinted with the zone's name.
 import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -6,7 +7,9 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { MatSelectModule } from '@angular/material/select';
+import { siteWallTimeToInstant } from '@shared/sites/site-clock.js';
 import { attestations, type ReadinessKind } from '@shared/vaccination-day/readiness-kinds.js';
+import { siteClockHint } from '../../shared/sites/site-clock-hint';
 
 let nextId = 0;
 
@@ -23,7 +26,8 @@ let nextId = 0;
         @if (visited()) {
           <div class="row">
             <mat-form-field><mat-label>Which farm</mat-label><input matInput [value]="farm()" (input)="farm.set($any($event.target).value)" /></mat-form-field>
-            <mat-form-field><mat-label>When</mat-label><input matInput type="datetime-local" [value]="farmAt()" (input)="farmAt.set($any($event.target).value)" /></mat-form-field>
+            <mat-form-field><mat-label>When</mat-label><input matInput type="datetime-local" [value]="farmAt()" (input)="farmAt.set($any($event.target).value)" />
+              <mat-hint>{{ farmAtHint() }}</mat-hint></mat-form-field>
           </div>
         }
       }
@@ -59,6 +63,8 @@ export class CheckForm {
   readonly kind = input.required<ReadinessKind>();
   readonly who = input('');
   readonly busy = input(false);
+  /** The vaccination's site's zone. */
+  readonly timeZone = input.required<string>();
   readonly answered = output<Record<string, unknown>>();
   protected readonly id = nextId++;
   protected readonly statements = computed(() => Object.entries(attestations[this.kind()] ?? {}).map(([key, label]) => ({ key, label })));
@@ -66,6 +72,7 @@ export class CheckForm {
   protected readonly visited = signal(false);
   protected readonly farm = signal('');
   protected readonly farmAt = signal('');
+  protected readonly farmAtHint = computed(() => siteClockHint(this.farmAt(), this.timeZone()));
   protected readonly temperature = signal('');
   protected readonly unit = signal<'F' | 'C'>('F');
 
@@ -79,7 +86,7 @@ export class CheckForm {
   protected submit(): void {
     switch (this.kind()) {
       case 'twelve_hour': {
-        const at = this.farmAt() ? new Date(this.farmAt()) : new Date();
+        const at = siteWallTimeToInstant(this.farmAt(), this.timeZone()) ?? new Date();
         this.answered.emit({ visits: this.visited() ? [{ siteId: null, at: at.toISOString(), label: this.farm().trim() || 'another farm' }] : [] });
         return;
       }

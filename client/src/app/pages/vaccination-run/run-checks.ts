@@ -1,6 +1,5 @@
 // The readiness checks of a vaccination: each crew member's own, then the vaccination's; a veterinarian may override a failed one.
 import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
-import { DatePipe } from '@angular/common';
 import { firstValueFrom } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -9,6 +8,7 @@ import { memberCheckKinds, readinessLabels, vaccinationCheckKinds, type Readines
 import { AuthStore } from '../../core/auth/auth-store';
 import { ApiError } from '../../core/http/api-error';
 import { StatusChip } from '../../shared/flocks/status-chip';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { DayApi, type CheckView, type RunView } from '../../shared/vaccination-day/day-api';
 import { CheckForm } from './check-form';
 
@@ -22,7 +22,7 @@ interface Row {
 
 @Component({
   selector: 'vy-run-checks',
-  imports: [CheckForm, StatusChip, MatButtonModule, MatFormFieldModule, MatInputModule, DatePipe],
+  imports: [CheckForm, StatusChip, MatButtonModule, MatFormFieldModule, MatInputModule, SiteTimePipe],
   templateUrl: './run-checks.html',
   styleUrl: './run-sections.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -5,11 +5,12 @@ import { MatButtonModule } from '@angular/material/button';
 import { AuthStore } from '../../core/auth/auth-store';
 import { WaterVolumeForm } from './water-volume-form';
 import { followLabel, mixingCautions } from '@shared/vaccination-day/mixing-cautions.js';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { RunStep } from './run-step';
 
 @Component({
   selector: 'vy-run-mixing',
-  imports: [MatButtonModule, DecimalPipe, WaterVolumeForm],
+  imports: [MatButtonModule, DecimalPipe, SiteTimePipe, WaterVolumeForm],
   template: `
     <section aria-labelledby="mixing-title">
       <h2 id="mixing-title">4. Mixing sheet</h2>
@@ -32,7 +33,7 @@ import { RunStep } from './run-step';
       }
       @if (run().status === 'confirmed' && run().useBy; as useBy) {
         <p class="countdown" [class.late]="left() < 0" role="timer" aria-live="off">{{ countdown() }}</p>
-        <p class="who">Mixed {{ run().mixedAt?.slice(11, 16) }} UTC; use by {{ useBy.slice(11, 16) }} UTC.</p>
+        <p class="who">Mixed {{ run().mixedAt | siteTime: run().timeZone : 'time' }}; use by {{ useBy | siteTime: run().timeZone : 'time' }}.</p>
       }
       <ul class="plain">
         @for (c of cautions; track c) { <li>{{ c }}</li> }

@@ -5,16 +5,17 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { RunStep } from './run-step';
 
 @Component({
   selector: 'vy-run-record',
-  imports: [ReactiveFormsModule, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule],
+  imports: [ReactiveFormsModule, MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, SiteTimePipe],
   template: `
     <section aria-labelledby="record-title">
       <h2 id="record-title">6. Record and sign</h2>
       @if (run().record; as r) {
-        <p>Signed by {{ r.signerName }} at {{ r.signedAt.slice(11, 16) }} UTC: {{ r.birdsVaccinated }} birds vaccinated. This vaccination is done.</p>
+        <p>Signed by {{ r.signerName }} at {{ r.signedAt | siteTime: run().timeZone : 'time' }}: {{ r.birdsVaccinated }} birds vaccinated. This vaccination is done.</p>
         <a mat-stroked-button [href]="'/api/vaccination-day/flocks/' + run().flockId + '/history.pdf'" target="_blank" rel="noopener">The flock's vaccination record</a>
       } @else if (run().startedAt && run().status === 'confirmed') {
         <form [formGroup]="form" (ngSubmit)="sign()" novalidate class="fields">

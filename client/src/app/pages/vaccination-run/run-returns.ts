@@ -5,11 +5,12 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { LotOut } from '../../shared/vaccination-day/day-api';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { RunStep } from './run-step';
 
 @Component({
   selector: 'vy-run-returns',
-  imports: [MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule],
+  imports: [MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatInputModule, SiteTimePipe],
   template: `
     <section aria-labelledby="returns-title">
       <h2 id="returns-title">5. Vials back</h2>
@@ -17,7 +18,7 @@ import { RunStep } from './run-step';
       @if (error(); as e) { <p class="form-error" role="alert">{{ e }}</p> }
       @for (l of out(); track l.lotId) {
         <div class="row">
-          <span>Lot {{ l.lotNumber }}: {{ l.out }} out since {{ l.leftAt.slice(11, 16) }} UTC</span>
+          <span>Lot {{ l.lotNumber }}: {{ l.out }} out since {{ l.leftAt | siteTime: run().timeZone : 'time' }}</span>
           <mat-form-field><mat-label>Unopened vials back</mat-label>
             <input matInput type="number" inputmode="numeric" min="1" [max]="l.out" [value]="counts()[l.lotId] ?? ''" (input)="setCount(l.lotId, $any($event.target).value)" /></mat-form-field>
           <mat-checkbox [checked]="unopened()[l.lotId] ?? false" (change)="setUnopened(l.lotId, $event.checked)">These vials are unopened</mat-checkbox>

@@ -1,4 +1,5 @@
 // One vaccination on the day, step by step: checks → trial → start → vials out → mixing → vials back → record and sign.
+// Its times (started, mixed, use by, signed, vials out) are on the site's clock, named, for a crew lead anywhere.
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { DecimalPipe } from '@angular/common';
@@ -9,6 +10,7 @@ import { firstValueFrom } from 'rxjs';
 import { readinessLabels } from '@shared/vaccination-day/readiness-kinds.js';
 import { ApiError } from '../../core/http/api-error';
 import { StatusChip } from '../../shared/flocks/status-chip';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { DayApi, type RunView } from '../../shared/vaccination-day/day-api';
 import { RunChecks } from './run-checks';
 import { RunMixing } from './run-mixing';
@@ -19,7 +21,7 @@ import { RunVials } from './run-vials';
 
 @Component({
   selector: 'vy-vaccination-run',
-  imports: [RouterLink, MatButtonModule, MatIconModule, DecimalPipe, StatusChip, RunChecks, RunTrial, RunVials, RunMixing, RunReturns, RunRecord],
+  imports: [RouterLink, MatButtonModule, MatIconModule, DecimalPipe, SiteTimePipe, StatusChip, RunChecks, RunTrial, RunVials, RunMixing, RunReturns, RunRecord],
   templateUrl: './vaccination-run.html',
   styleUrl: './run-sections.scss',
   styles: `.narrow { max-width: 720px; } .start { margin: 8px 0; }`,
