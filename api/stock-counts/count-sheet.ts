@@ -25,7 +25,8 @@ export interface CountSummary {
 }
 
 export interface CountSheet {
-  fridge: { id: number; code: string; name: string; siteId: number; siteName: string };
+  /** timeZone: the site's, on whose clock the counts and the due day read. */
+  fridge: { id: number; code: string; name: string; siteId: number; siteName: string; timeZone: string };
   due: FridgeCountDue;
   lines: CountSheetLine[];
   recentCounts: CountSummary[];
@@ -48,7 +49,7 @@ export async function countSheet(sequelize: Sequelize, fridgeId: number): Promis
   const lotNumbers = await lotNumbersOf(sequelize, counts.flatMap((c) => ((c as unknown as { lines: StockCountLine[] }).lines ?? []).map((l) => l.lotId)));
   const [due] = await fridgeCountStates(sequelize, { siteIds: null, fridgeId });
   return {
-    fridge: { id: fridge.id, code: fridge.code, name: fridge.name, siteId: site.id, siteName: site.name },
+    fridge: { id: fridge.id, code: fridge.code, name: fridge.name, siteId: site.id, siteName: site.name, timeZone: site.timeZone },
     due: due!,
     lines: rows.map((row) => ({ ...row, status: statuses.get(row.lotId)?.status ?? 'usable' })),
     recentCounts: counts.map((count) => ({

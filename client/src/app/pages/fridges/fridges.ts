@@ -1,7 +1,6 @@
 // The fridges list: every visible fridge with what needs attention now, and a dialog to add or change one.
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -11,6 +10,7 @@ import { RouterLink } from '@angular/router';
 import type { FridgeStatus } from '@shared/fridges/fridge-schemas.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { SitesApi } from '../../core/sites/sites-api';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { FridgeDialog, type FridgeDialogData } from './fridge-dialog';
 import { LotsApi } from '../../shared/lots/lots-api';
@@ -18,7 +18,7 @@ import { FridgesApi } from './fridges-api';
 
 @Component({
   selector: 'vy-fridges',
-  imports: [MatTableModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DatePipe, TemperaturePipe],
+  imports: [MatTableModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, SiteTimePipe, TemperaturePipe],
   templateUrl: './fridges.html',
   styleUrl: './fridges.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

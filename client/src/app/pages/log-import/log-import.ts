@@ -2,7 +2,7 @@
 import { HttpEventType } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked, viewChild, type ElementRef } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -16,6 +16,7 @@ import type { ImportOutcome, ImportProgress } from '@shared/fridges/log-import-v
 import type { StoredLogMapping } from '@shared/fridges/log-mapping-schema.js';
 import { sniffLog, type LogNeed } from '@shared/logs/index.js';
 import { ApiError } from '../../core/http/api-error';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { TemperaturePipe } from '../../shared/temperature/temperature-pipe';
 import { FridgesApi } from '../fridges/fridges-api';
 import { previewReadings } from './preview-readings';
@@ -40,7 +41,7 @@ const phaseLabels: Record<ImportProgress['phase'], string> = {
 
 @Component({
   selector: 'vy-log-import',
-  imports: [ReactiveFormsModule, MatFormFieldModule, MatSelectModule, MatInputModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DatePipe, DecimalPipe, TemperaturePipe],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatSelectModule, MatInputModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, SiteTimePipe, DecimalPipe, TemperaturePipe],
   templateUrl: './log-import.html',
   styleUrl: './log-import.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -42,13 +42,13 @@ const kindLabels: Record<MovementKind, string> = {
           <ng-container matColumnDef="from">
             <th mat-header-cell *matHeaderCellDef>From</th>
             <td mat-cell *matCellDef="let m">
-              @if (m.from; as p) { @if (p.fridgeId) { <a [routerLink]="['/fridges', p.fridgeId]">{{ p.fridgeCode }}</a> · } {{ p.siteName }} } @else { — }
+              @if (m.from; as p) { @if (p.fridgeId) { @if (linkFridges()) { <a [routerLink]="['/fridges', p.fridgeId]">{{ p.fridgeCode }}</a> } @else { {{ p.fridgeCode }} } · } {{ p.siteName }} } @else { — }
             </td>
           </ng-container>
           <ng-container matColumnDef="to">
             <th mat-header-cell *matHeaderCellDef>To</th>
             <td mat-cell *matCellDef="let m">
-              @if (m.to; as p) { @if (p.fridgeId) { <a [routerLink]="['/fridges', p.fridgeId]">{{ p.fridgeCode }}</a> · } {{ p.siteName }} } @else { — }
+              @if (m.to; as p) { @if (p.fridgeId) { @if (linkFridges()) { <a [routerLink]="['/fridges', p.fridgeId]">{{ p.fridgeCode }}</a> } @else { {{ p.fridgeCode }} } · } {{ p.siteName }} } @else { — }
             </td>
           </ng-container>
           <ng-container matColumnDef="reason">
@@ -75,6 +75,8 @@ export class LotHistory {
   readonly history = input.required<LotPageMovement[]>();
   /** The lot's site's zone, for a side on a site the user does not see. */
   readonly timeZone = input.required<string>();
+  /** Whether the reader may open fridge pages (else the codes are text: the route would send them home). */
+  readonly linkFridges = input(true);
   protected readonly columns = ['at', 'kind', 'vials', 'from', 'to', 'reason'];
 
   /** Vials arrive (or are counted, issued, discarded) at the receiving side, else at the side they left. */

@@ -43,6 +43,11 @@ export class LotDetail {
     this.auth.user();
     return this.auth.hasRole('admin', 'storage');
   });
+  /** Fridge pages are for api/fridges/fridge-access.ts `fridgeReaders`: the others see a fridge's code, not a link home. */
+  protected readonly canReadFridges = computed(() => {
+    this.auth.user();
+    return this.auth.hasRole('admin', 'storage', 'veterinarian');
+  });
   /** The review page's readers (its nav entry's roles) get a way from a waiting hold to the decision. */
   protected readonly canReview = computed(() => {
     this.auth.user();

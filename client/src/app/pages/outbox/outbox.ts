@@ -2,11 +2,12 @@
 import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
 import { map } from 'rxjs';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 
 interface OutboxMessage {
   id: string;
@@ -20,7 +21,7 @@ interface OutboxMessage {
 
 @Component({
   selector: 'vy-outbox',
-  imports: [MatExpansionModule, MatButtonModule, MatIconModule, DatePipe, DecimalPipe],
+  imports: [MatExpansionModule, MatButtonModule, MatIconModule, SiteTimePipe, DecimalPipe],
   templateUrl: './outbox.html',
   styleUrl: './outbox.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

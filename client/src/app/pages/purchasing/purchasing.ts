@@ -1,5 +1,5 @@
 // Purchasing's view of a site: shortfalls, orders to place, stock against the planned vaccinations, expiring stock, transfers, open orders.
-import { DecimalPipe, CurrencyPipe, DatePipe } from '@angular/common';
+import { DecimalPipe, CurrencyPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, linkedSignal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -24,11 +24,12 @@ import { StatusChip } from '../../shared/flocks/status-chip';
 import { OrderDialog, type OrderDialogData } from './order-dialog';
 import { StockSettingsDialog, type StockSettingsDialogData } from './stock-settings-dialog';
 import { TransferDialog, type TransferDialogData } from './transfer-dialog';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { CountPipe } from '../../shared/text/count-pipe';
 
 @Component({
   selector: 'vy-purchasing',
-  imports: [MatTableModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DecimalPipe, CurrencyPipe, DatePipe, SitePicker, StatusChip, CountPipe],
+  imports: [MatTableModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DecimalPipe, CurrencyPipe, SiteTimePipe, SitePicker, StatusChip, CountPipe],
   templateUrl: './purchasing.html',
   styleUrl: './purchasing.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -44,6 +45,8 @@ export class Purchasing {
   /** A link may name the site (`?site=`, as the home card's does); else the first of the user's sites. */
   private readonly linkedSite = Number(inject(ActivatedRoute).snapshot.queryParamMap.get('site')) || null;
   protected readonly siteId = linkedSignal<number | null>(() => this.sites().find((site) => site.id === this.linkedSite)?.id ?? this.sites()[0]?.id ?? null);
+  /** The site's zone: an order's sendings read on its clock. */
+  protected readonly siteZone = computed(() => this.sites().find((site) => site.id === this.siteId())?.timeZone);
   protected readonly canBuy = computed(() => {
     this.auth.user();
     return this.auth.hasRole('admin', 'purchasing');

@@ -1,5 +1,4 @@
 // The receiving home: shipments expected today and overdue, the shipment in progress on this phone, and recent arrivals.
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -14,12 +13,13 @@ import { OutcomeChip } from '../../shared/receiving/outcome-chip';
 import { ReceivingApi } from '../../shared/receiving/receiving-api';
 import { ReceivingDraftStore } from '../receive-shipment/receiving-draft-store';
 import { CountPipe } from '../../shared/text/count-pipe';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 
 const dueLabels = { overdue: 'Overdue', today: 'Due today', later: 'Coming' } as const;
 
 @Component({
   selector: 'vy-receiving',
-  imports: [MatButtonModule, MatCardModule, MatIconModule, MatFormFieldModule, MatSelectModule, RouterLink, DatePipe, OutcomeChip, CountPipe],
+  imports: [MatButtonModule, MatCardModule, MatIconModule, MatFormFieldModule, MatSelectModule, RouterLink, SiteTimePipe, OutcomeChip, CountPipe],
   templateUrl: './receiving.html',
   styleUrl: './receiving.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -37,12 +37,18 @@ export class Receiving {
     return this.auth.hasRole('admin', 'receiving');
   });
   protected readonly dueLabels = dueLabels;
+  private readonly zones = computed(() => new Map(this.sites().map((site) => [site.id, site.timeZone])));
 
   protected readonly expected = rxResource({ params: () => this.siteId() ?? undefined, stream: ({ params }) => this.api.expected(params) });
   protected readonly recent = rxResource({ params: () => this.siteId() ?? undefined, stream: ({ params }) => this.api.recent(params) });
   protected readonly draft = signal(this.drafts.peek());
   protected readonly dueNow = computed(() => (this.expected.value() ?? []).filter((order) => order.due !== 'later'));
   protected readonly comingUp = computed(() => (this.expected.value() ?? []).filter((order) => order.due === 'later'));
+
+  /** A shipment arrived at its site: its time reads on that site's clock (the sites list carries each zone). */
+  protected zoneOf(siteId: number): string | undefined {
+    return this.zones().get(siteId);
+  }
 
   protected async discardDraft(): Promise<void> {
     await this.drafts.discard();

@@ -1,17 +1,17 @@
 // On the fridge page: the lots in the fridge (linked to their pages), whether its stock count is due, and its count sheet.
-import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { countDueReasonLabels } from '@shared/lots/count-due.js';
 import { LotStatusChip } from '../../shared/lots/lot-status-chip';
 import { LotsApi } from '../../shared/lots/lots-api';
+import { siteDayText } from './site-day';
 
 @Component({
   selector: 'vy-count-due-note',
-  imports: [MatButtonModule, MatIconModule, RouterLink, DatePipe, LotStatusChip],
+  imports: [MatButtonModule, MatIconModule, RouterLink, LotStatusChip],
   template: `
     @if (sheet.value(); as s) {
       <div class="note" [class.due]="s.due.due">
@@ -19,7 +19,7 @@ import { LotsApi } from '../../shared/lots/lots-api';
           @if (s.due.due) {
             <strong>Stock count due:</strong> {{ reasons() }}.
           } @else {
-            Stock last counted {{ s.due.lastCountAt | date: 'mediumDate' }}.
+            Stock last counted {{ lastCounted() }}.
           }
         </span>
         <a mat-button [routerLink]="['/fridges', fridgeId(), 'count']"><mat-icon>inventory</mat-icon>Count sheet</a>
@@ -52,5 +52,11 @@ export class CountDueNote {
   private readonly api = inject(LotsApi);
   protected readonly sheet = rxResource({ params: () => this.fridgeId(), stream: ({ params }) => this.api.sheet(params) });
   protected readonly reasons = computed(() => (this.sheet.value()?.due.reasons ?? []).map((r) => countDueReasonLabels[r]).join('; '));
+  private readonly locale = inject(LOCALE_ID);
+  /** The day on the site's calendar. */
+  protected readonly lastCounted = computed(() => {
+    const sheet = this.sheet.value();
+    return sheet ? siteDayText(sheet.due.lastCountAt, sheet.fridge.timeZone, this.locale) : '';
+  });
   protected readonly vials = computed(() => (this.sheet.value()?.lines ?? []).reduce((sum, line) => sum + line.expected, 0));
 }

@@ -1,7 +1,6 @@
 // A fridge's count sheet: each lot's expected vials, what was counted, the difference and why; submitting adjusts stock.
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, LOCALE_ID, computed, inject, input, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
-import { DatePipe } from '@angular/common';
 import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators, type FormGroup, type FormControl } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -15,13 +14,15 @@ import { countDueReasonLabels } from '@shared/lots/count-due.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ApiError } from '../../core/http/api-error';
 import { LotStatusChip } from '../../shared/lots/lot-status-chip';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
+import { siteDayText } from './site-day';
 import { LotsApi, type CountSheet } from '../../shared/lots/lots-api';
 
 type LineForm = FormGroup<{ counted: FormControl<number | null>; reason: FormControl<string> }>;
 
 @Component({
   selector: 'vy-stock-count',
-  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, DatePipe, LotStatusChip],
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatButtonModule, MatIconModule, MatProgressBarModule, RouterLink, SiteTimePipe, LotStatusChip],
   templateUrl: './stock-count.html',
   styleUrl: './stock-count.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,6 +34,7 @@ export class StockCountSheet {
   private readonly fb = inject(NonNullableFormBuilder);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
+  private readonly locale = inject(LOCALE_ID);
   protected readonly id = computed(() => Number(this.fridgeId()));
   // A fresh sheet (first load or reload) starts a fresh count, set up before the sheet renders.
   protected readonly sheet = rxResource({ params: () => this.id(), stream: ({ params }) => this.api.sheet(params).pipe(tap((sheet) => this.reset(sheet))) });
@@ -77,6 +79,11 @@ export class StockCountSheet {
   protected differenceText(index: number): string {
     const d = this.difference(index);
     return d === null ? 'not counted' : d === 0 ? 'matches' : d > 0 ? `${d} more than expected` : `${-d} fewer than expected`;
+  }
+
+  /** The day the next count is due, on the site's calendar. */
+  protected dueDay(sheet: CountSheet): string {
+    return siteDayText(sheet.due.dueAt, sheet.fridge.timeZone, this.locale);
   }
 
   protected dueReasons(sheet: CountSheet): string {

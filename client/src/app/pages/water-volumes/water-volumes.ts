@@ -1,5 +1,5 @@
 // Water for the mix per product and age range: the entries so far (who entered them, from what) and a form to add one.
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { FormGroupDirective, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
@@ -12,11 +12,12 @@ import { ActivatedRoute, RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { applyServerErrors, controlMessage } from '../../core/forms/server-errors';
 import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
+import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { DayApi } from '../../shared/vaccination-day/day-api';
 
 @Component({
   selector: 'vy-water-volumes',
-  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, RouterLink, DatePipe, DecimalPipe],
+  imports: [ReactiveFormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, RouterLink, SiteTimePipe, DecimalPipe],
   templateUrl: './water-volumes.html',
   styleUrl: './water-volumes.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -59,7 +59,7 @@ export interface FridgeCountDue extends CountDue {
 }
 
 export interface CountSheet {
-  fridge: { id: number; code: string; name: string; siteId: number; siteName: string };
+  fridge: { id: number; code: string; name: string; siteId: number; siteName: string; timeZone: string };
   due: FridgeCountDue;
   lines: { lotId: number; lotNumber: string; product: string; dosesPerVial: number; expiry: string; expected: number; status: LotStatus }[];
   recentCounts: { id: number; countedAt: string; countedBy: string; notes: string; lines: { lotId: number; lotNumber: string; expected: number; counted: number; difference: number; reason: string }[] }[];
