@@ -1,5 +1,6 @@
 // The receiving form: mobile-first, one-handed; the draft is kept on the phone and survives a reload or a lost connection.
 // Its times are the site's clock's, typed and hinted with the zone's name, wherever the phone's clock is set.
+import { BreakpointObserver } from '@angular/cdk/layout';
 import { DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, Injector, OnInit, afterNextRender, computed, inject, input, signal, viewChild, viewChildren } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
@@ -22,8 +23,10 @@ import { allChecksFine, outcomeLabels, outcomes, readingPlaceLabels, readingPlac
 import { placeScan } from '@shared/receiving/place-scan.js';
 import type { PurchaseOrderView } from '@shared/receiving/purchase-order-schemas.js';
 import type { ReceivingContext } from '@shared/receiving/shipment-view.js';
+import type { SiteView } from '@shared/sites/site-schemas.js';
 import { siteWallTime } from '@shared/sites/site-clock.js';
 import { AuthStore } from '../../core/auth/auth-store';
+import { SitesApi } from '../../core/sites/sites-api';
 import { ApiError } from '../../core/http/api-error';
 import { CatalogueApi } from '../../shared/catalogue/catalogue-api';
 import { ReceivingApi } from '../../shared/receiving/receiving-api';
@@ -61,6 +64,7 @@ export class ReceiveShipment implements OnInit {
   private readonly auth = inject(AuthStore);
   private readonly api = inject(ReceivingApi);
   private readonly catalogue = inject(CatalogueApi);
+  private readonly sitesApi = inject(SitesApi);
   private readonly drafts = inject(ReceivingDraftStore);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
@@ -84,6 +88,8 @@ export class ReceiveShipment implements OnInit {
   protected readonly formError = signal<string | null>(null);
   protected readonly loaded = signal(false);
   protected readonly online = toSignal(merge(fromEvent(window, 'online'), fromEvent(window, 'offline')).pipe(map(() => navigator.onLine)), { initialValue: navigator.onLine });
+  /** On a phone the "Read from" and "Outcome" choices stack, one full-width row each, instead of wrapping unevenly. */
+  protected readonly narrow = toSignal(inject(BreakpointObserver).observe('(max-width: 599.98px)').pipe(map((state) => state.matches)), { initialValue: false });
   protected readonly outcomes = outcomes;
   protected readonly outcomeLabels = outcomeLabels;
   protected readonly readingPlaces = readingPlaces;
@@ -91,7 +97,12 @@ export class ReceiveShipment implements OnInit {
 
   private clientKey = newDraftKey();
   private readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
-  private readonly siteId = computed(() => Number(this.site()) || 0);
+  /** Chosen on the page when the link named no site (a bookmark of /receiving/new). */
+  private readonly chosenSite = signal<number | null>(null);
+  private readonly siteId = computed(() => Number(this.site()) || this.chosenSite() || 0);
+  /** The person's sites, when the link named none and they have several: they choose before the form. */
+  protected readonly siteChoices = signal<SiteView[] | null>(null);
+  protected readonly sitesError = signal<string | null>(null);
   private readonly orderId = computed(() => (this.order() ? Number(this.order()) : null));
   /** The site's zone: every time on the form is read on its clock. */
   protected readonly timeZone = computed(() => this.context()?.timeZone ?? null);
@@ -114,6 +125,29 @@ export class ReceiveShipment implements OnInit {
   }
 
   async ngOnInit(): Promise<void> {
+    // No site in the link: the person's only site, or their choice among theirs; never a context call for site 0.
+    if (!this.siteId()) {
+      const sites = await firstValueFrom(this.sitesApi.list()).catch(() => null);
+      if (sites?.length === 1) {
+        this.chosenSite.set(sites[0].id);
+      } else {
+        this.siteChoices.set(sites ?? []);
+        this.sitesError.set(sites === null ? 'Your sites could not be loaded: open this form from the Receiving page.' : sites.length ? null : 'You have no site to receive at.');
+        return;
+      }
+    }
+    await this.load();
+  }
+
+  /** The site chosen before the form: the address names it (a reload keeps it), then the form loads for it. */
+  protected async chooseSite(siteId: number): Promise<void> {
+    this.chosenSite.set(siteId);
+    this.siteChoices.set(null);
+    await this.router.navigate([], { queryParams: { site: siteId }, queryParamsHandling: 'merge', replaceUrl: true });
+    await this.load();
+  }
+
+  private async load(): Promise<void> {
     const siteId = this.siteId();
     const [context, products] = await Promise.all([firstValueFrom(this.api.context(siteId)), firstValueFrom(this.catalogue.productsForReceiving())]);
     this.context.set(context);

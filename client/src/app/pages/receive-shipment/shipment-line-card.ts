@@ -1,7 +1,8 @@
 // One lot on the receiving form: what it is, its counts (intact follows the others until typed), acceptance and storage.
 import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, inject, input, output, viewChild } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
-import { ReactiveFormsModule } from '@angular/forms';
+import { type AbstractControl, ReactiveFormsModule } from '@angular/forms';
+import type { ErrorStateMatcher } from '@angular/material/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -34,10 +35,20 @@ export class ShipmentLineCard implements OnInit {
   readonly presentations = input.required<PresentationChoice[]>();
   readonly fridges = input.required<{ id: number; code: string; name: string }[]>();
   readonly refused = input(false);
+  /** True once the form was sent: every field shows what is missing. */
+  readonly showErrors = input(false);
   /** The site's zone, whose clock "Went in at" is typed on. */
   readonly timeZone = input<string | null>(null);
   readonly removed = output<void>();
   protected readonly message = controlMessage;
+  /**
+   * A field shows its error once the person changed it or sent the form. Touched alone is not enough: "Add a lot by
+   * hand" focuses the product field, and the focus leaving it would mark "Required." before any answer. (The card's
+   * own [formGroup] is never submitted, so "sent" comes from the form above.)
+   */
+  protected readonly errorMatcher: ErrorStateMatcher = {
+    isErrorState: (control: AbstractControl | null) => !!control?.invalid && (control.dirty || this.showErrors()),
+  };
   private readonly presentationSelect = viewChild.required<MatSelect>('presentation');
   protected readonly counts = [
     { name: 'vialsExpected', label: 'Expected' },
