@@ -31,6 +31,7 @@ async function pdfData(orderId: number, actorId: number): Promise<{ data: OrderP
       expectedDate: view.expectedDate,
       siteName: view.siteName,
       siteCode: order.site!.code,
+      siteTimeZone: order.site!.timeZone,
       supplierName: view.supplierName,
       supplierEmail: order.supplier!.orderEmail,
       orderedBy: { name: actor.name, email: actor.email },

@@ -16,6 +16,8 @@ export interface OrderPdfData {
   expectedDate: string;
   siteName: string;
   siteCode: string;
+  /** The ordering site's zone: the footer's "made" time is on its clock. */
+  siteTimeZone: string;
   supplierName: string;
   supplierEmail: string;
   orderedBy: { name: string; email: string };
@@ -28,7 +30,9 @@ const ink = '#1f2a24';
 const muted = '#5b6660';
 const rule = '#b9c4bd';
 
-const money = (value: number) => value.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+// As the app shows money (Angular's CurrencyPipe with its defaults: locale en-US, USD, symbol, two decimals): "$1,250.00".
+const usd = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 2 });
+const money = (value: number) => usd.format(value);
 const count = (value: number) => value.toLocaleString('en-US');
 
 function party(doc: PdfDocument, x: number, y: number, heading: string, lines: string[]): void {
@@ -59,7 +63,7 @@ function row(doc: PdfDocument, y: number, cells: string[], font: string): number
   return y + height + 6;
 }
 
-export async function purchaseOrderPdf(data: OrderPdfData): Promise<Buffer> {
+export async function purchaseOrderPdf(data: OrderPdfData, now = new Date()): Promise<Buffer> {
   const doc = createPdf({ title: `Purchase order ${data.reference}`, subject: `Order from ${data.siteName} to ${data.supplierName}` });
   doc.font(pdfFonts.bold).fontSize(22).fillColor(ink).text('Purchase order', 50, 50);
   doc.font(pdfFonts.semibold).fontSize(12).text(data.reference, 350, 56, { width: 212, align: 'right' });
@@ -112,6 +116,6 @@ export async function purchaseOrderPdf(data: OrderPdfData): Promise<Buffer> {
     doc.y + 16,
     { width: 500 },
   );
-  addPageFooters(doc, `Purchase order ${data.reference} · ${data.siteName}`);
+  addPageFooters(doc, `Purchase order ${data.reference} · ${data.siteName}`, { at: now, timeZone: data.siteTimeZone });
   return pdfToBuffer(doc);
 }

@@ -2,7 +2,8 @@
 import { Op } from 'sequelize';
 import { Lot, Presentation, Product, Site, User, UserSite } from '../../database/models/index.js';
 import { AppError } from '../http/app-error.js';
-import { createPdf, pdfFonts, pdfToBuffer } from '../pdf/pdf-document.js';
+import { addPageFooters, createPdf, pdfFonts, pdfToBuffer } from '../pdf/pdf-document.js';
+import { formatSiteTime } from '../pdf/site-time.js';
 import { undecidedHoldsByLot } from '../lots/holds.js';
 import { lotSiteId } from '../exposure/lot-exposure-service.js';
 
@@ -24,14 +25,14 @@ async function veterinariansFor(siteId: number): Promise<User[]> {
   });
 }
 
-export async function doNotUseTag(lotId: number): Promise<{ fileName: string; pdf: Buffer }> {
+export async function doNotUseTag(lotId: number, now = new Date()): Promise<{ fileName: string; pdf: Buffer }> {
   const lot = await Lot.findByPk(lotId, { include: [{ model: Presentation, as: 'presentation', include: [{ model: Product, as: 'product' }] }] });
   const product = lot?.presentation?.product;
   const siteId = await lotSiteId(lotId);
   if (!lot || !product || siteId === null) throw AppError.notFound('No such lot.');
   const holds = (await undecidedHoldsByLot([lotId])).get(lotId) ?? [];
   if (!holds.length) throw AppError.conflict('This lot has no undecided hold, so it needs no "do not use" tag.');
-  const site = await Site.findByPk(siteId);
+  const site = (await Site.findByPk(siteId))!;
   const vets = await veterinariansFor(siteId);
   const since = holds.map((h) => h.openedAt).sort()[0];
 
@@ -43,16 +44,17 @@ export async function doNotUseTag(lotId: number): Promise<{ fileName: string; pd
   doc.font(pdfFonts.regular).fontSize(14)
     .text(`${product.name}, ${lot.presentation!.dosesPerVial.toLocaleString('en-US')} doses per vial`)
     .text(`Expiry ${lot.expiry}`)
-    .text(`Site ${site?.name ?? ''}`)
+    .text(`Site ${site.name}`)
     .moveDown()
     .font(pdfFonts.semibold).text('On hold because')
     .font(pdfFonts.regular);
   for (const hold of holds) doc.text(`• ${causeWords[hold.cause] ?? hold.cause}${hold.reason ? `: ${hold.reason}` : ''}`);
-  doc.moveDown().text(`On hold since ${new Date(since).toISOString().slice(0, 16).replace('T', ' ')} UTC`);
+  doc.moveDown().text(`On hold since ${formatSiteTime(since, site.timeZone)}`);
   doc.moveDown().font(pdfFonts.semibold).text('Ask before using or discarding')
     .font(pdfFonts.regular).text(vets.length ? vets.map((v) => `${v.name} (${v.email})`).join('\n') : 'The flock veterinarian');
   doc.moveDown(2).fontSize(11).fillColor('#333333')
     .text('Keep these vials in the fridge at proper temperature. Do not discard them unless the veterinarian directs it. '
       + 'The veterinarian decides; the product label and local rules apply.');
+  addPageFooters(doc, `Do-not-use tag · lot ${lot.lotNumber}`, { at: now, timeZone: site.timeZone });
   return { fileName: `do-not-use-${lot.lotNumber}.pdf`, pdf: await pdfToBuffer(doc) };
 }

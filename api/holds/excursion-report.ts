@@ -2,19 +2,19 @@
 // each held lot's exposure with vials and doses at risk, the troubleshooting record and the signed decisions.
 import type { Sequelize } from 'sequelize';
 import { holdDecisionLabels } from '../../shared/lots/lot-status.js';
-import { celsiusToFahrenheit } from '../../shared/temperature/convert-temperature.js';
+import { fromCelsius } from '../../shared/temperature/convert-temperature.js';
+import type { TemperatureUnit } from '../../shared/temperature/temperature-unit.js';
 import { mergeBackupReadings } from '../../shared/logs/merge-backup-readings.js';
 import { Fridge, Logger, Site } from '../../database/models/index.js';
 import { addPageFooters, createPdf, pdfFonts, pdfToBuffer, type PdfDocument } from '../pdf/pdf-document.js';
 import { loadFridgeReadings } from '../readings/load-fridge-readings.js';
 import { drawTable } from '../shipments/report-table.js';
-import { formatSiteTime } from '../shipments/site-time.js';
+import { formatSiteTime } from '../pdf/site-time.js';
+import { degreeMinutesPair, temperaturePair } from '../pdf/temperature-text.js';
 import { exposureEventDetail, type ExposureEventDetail } from './exposure-event-detail.js';
 import { drawTemperatureChart } from './report-chart.js';
 
 const HOUR = 3_600_000;
-// °C first (the record's unit), °F beside it for the farms that read °F.
-const c1 = (n: number | null | undefined) => (n === null || n === undefined || !Number.isFinite(n) ? '—' : `${n.toFixed(1)} °C (${celsiusToFahrenheit(n).toFixed(1)} °F)`);
 const whole = (n: number | null | undefined) => (n === null || n === undefined ? '—' : Math.round(n).toLocaleString('en-US'));
 
 function heading(doc: PdfDocument, text: string): void {
@@ -28,12 +28,14 @@ function pairs(doc: PdfDocument, rows: [string, string][]): void {
   }
 }
 
-export async function excursionReportPdf(sequelize: Sequelize, eventId: number): Promise<{ fileName: string; pdf: Buffer }> {
+/** `unit` is the reader's display unit: it comes first everywhere, the other scale in brackets. */
+export async function excursionReportPdf(sequelize: Sequelize, eventId: number, unit: TemperatureUnit = 'C', now = new Date()): Promise<{ fileName: string; pdf: Buffer }> {
   const detail = await exposureEventDetail(sequelize, eventId);
   const { event } = detail;
   const fridge = (await Fridge.findByPk(event.fridgeId))!;
   const site = (await Site.findByPk(fridge.siteId))!;
-  const at = (ms: number | string) => formatSiteTime(new Date(ms), site.timeZone);
+  const at = (ms: number | string) => formatSiteTime(ms, site.timeZone);
+  const c1 = (n: number | null | undefined) => temperaturePair(n, unit);
   const start = new Date(event.start).getTime();
   const end = new Date(event.end).getTime();
   // The chart shows the 24 hours the MKT covers, and some hours after the event.
@@ -54,12 +56,12 @@ export async function excursionReportPdf(sequelize: Sequelize, eventId: number):
     ['Site', site.name],
     ['Fridge', `${fridge.name} (${fridge.code}), ${fridge.place}`],
     ['Period shown', `${at(from)} to ${at(to)}`],
-    ['Product range judged', event.cause === 'freeze' ? 'at or below 0 °C (freeze-sensitive)' : `${c1(event.lowC)} to ${c1(event.highC)}`],
+    ['Product range judged', event.cause === 'freeze' ? `at or below ${c1(0)} (freeze-sensitive)` : `${c1(event.lowC)} to ${c1(event.highC)}`],
     ['Fridge alarm range', `${c1(event.fridgeLowC)} to ${c1(event.fridgeHighC)}${event.fridgeAlarmed ? '' : ' (the fridge raised no alarm)'}`],
   ]);
 
   const chartTop = doc.y + 10;
-  drawTemperatureChart(doc, { readings, from, to, band: event.cause === 'freeze' ? { lowC: 0, highC: Infinity } : { lowC: event.lowC, highC: event.highC }, alarm: { lowC: event.fridgeLowC, highC: event.fridgeHighC }, event: { start, end }, label: (ms) => at(ms).slice(5, 16) }, { x: 90, y: chartTop, width: doc.page.width - 140, height: 170 });
+  drawTemperatureChart(doc, { readings, from, to, band: event.cause === 'freeze' ? { lowC: 0, highC: Infinity } : { lowC: event.lowC, highC: event.highC }, alarm: { lowC: event.fridgeLowC, highC: event.fridgeHighC }, event: { start, end }, label: (ms) => at(ms).slice(5, 16), unit }, { x: 90, y: chartTop, width: doc.page.width - 140, height: 170 });
   doc.y = chartTop + 190;
   doc.x = doc.page.margins.left;
   doc.fontSize(8).fillColor('#555555').text(`Shaded green: the allowed range. Shaded red: the event. Dashed: the fridge's alarm limits. ${readings.length.toLocaleString('en-US')} readings in the period; times in ${site.timeZone}.`).fillColor('#1b1f1d');
@@ -70,31 +72,31 @@ export async function excursionReportPdf(sequelize: Sequelize, eventId: number):
     ['End', `${at(event.end)}${event.openEnded ? ' (still outside when the data ends)' : ''}`],
     ['Minutes outside', event.minutes === null ? 'unknown (seen at a daily check)' : whole(event.minutes)],
     [event.kind === 'high' ? 'Peak (highest)' : 'Peak (lowest)', c1(event.peakC)],
-    ['Degree-minutes', event.degreeMinutesC === null ? '—' : `${event.degreeMinutesC.toFixed(1)} °C·min`],
+    ['Degree-minutes', degreeMinutesPair(event.degreeMinutesC, unit)],
     ['MKT, 24 h ending at the end', c1(event.mkt24hC)],
   ]);
-  lotsSection(doc, detail);
-  troubleshootingSection(doc, detail, at);
+  lotsSection(doc, detail, unit);
+  troubleshootingSection(doc, detail, at, c1);
   decisionsSection(doc, detail, at);
   doc.moveDown().fontSize(8).fillColor('#555555').text('Vialyard records and computes; the veterinarian decides. The product label and local rules apply. Keep this record at least 3 years.');
-  addPageFooters(doc, `Excursion report ${event.id} · ${fridge.name} · made ${at(Date.now())}`);
+  addPageFooters(doc, `Excursion report ${event.id} · ${fridge.name}`, { at: now, timeZone: site.timeZone });
   return { fileName: `excursion-report-${event.id}.pdf`, pdf: await pdfToBuffer(doc) };
 }
 
-function lotsSection(doc: PdfDocument, detail: ExposureEventDetail): void {
+function lotsSection(doc: PdfDocument, detail: ExposureEventDetail, unit: TemperatureUnit): void {
   heading(doc, 'Lots held');
   const total = detail.lots.reduce((sum, lot) => ({ vials: sum.vials + lot.vials, doses: sum.doses + lot.doses }), { vials: 0, doses: 0 });
-  doc.text(`${detail.lots.length} lot(s); at risk: ${total.vials.toLocaleString('en-US')} vials, ${total.doses.toLocaleString('en-US')} doses.`);
+  doc.text(`${detail.lots.length} lot${detail.lots.length === 1 ? '' : 's'}; at risk: ${total.vials.toLocaleString('en-US')} vials, ${total.doses.toLocaleString('en-US')} doses.`);
   drawTable(doc, [
     { header: 'Lot', width: 70 }, { header: 'Product', width: 110 }, { header: 'Vials', width: 40, align: 'right' }, { header: 'Doses', width: 55, align: 'right' },
     { header: 'Min above', width: 50, align: 'right' }, { header: 'Min below', width: 50, align: 'right' }, { header: 'Min unknown', width: 55, align: 'right' }, { header: 'MKT in storage', width: 82, align: 'right' },
   ], detail.lots.map((lot) => [
     `${lot.lotNumber}${lot.cause === 'freeze' ? ' (freeze)' : ''}`, lot.product, whole(lot.vials), whole(lot.doses),
-    whole(lot.exposure.minutesAbove), whole(lot.exposure.minutesBelow), whole(lot.exposure.minutesUnknown), lot.exposure.mktStorageC === null ? '—' : `${lot.exposure.mktStorageC.toFixed(1)} °C`,
+    whole(lot.exposure.minutesAbove), whole(lot.exposure.minutesBelow), whole(lot.exposure.minutesUnknown), lot.exposure.mktStorageC === null ? '—' : `${fromCelsius(lot.exposure.mktStorageC, unit).toFixed(1)} °${unit}`,
   ]));
 }
 
-function troubleshootingSection(doc: PdfDocument, detail: ExposureEventDetail, at: (ms: string) => string): void {
+function troubleshootingSection(doc: PdfDocument, detail: ExposureEventDetail, at: (ms: string) => string, c1: (n: number | null) => string): void {
   heading(doc, 'Troubleshooting record');
   const t = detail.troubleshooting;
   if (!t) {

@@ -39,7 +39,7 @@ export function holdsRoutes(context: AppContext) {
   });
 
   router.get('/events/:exposureEventId/report.pdf', { roles: [...reviewers.roles], siteOf: eventOf }, async (req, res) => {
-    const report = await excursionReportPdf(context.sequelize, parseIdParam(req.params.exposureEventId));
+    const report = await excursionReportPdf(context.sequelize, parseIdParam(req.params.exposureEventId), req.user!.displayUnit);
     res.type('application/pdf').attachment(report.fileName).send(report.pdf);
   });
 

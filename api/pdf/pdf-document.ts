@@ -2,6 +2,7 @@
 import PDFDocument from 'pdfkit';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
+import { madeByVialyard } from './site-time.js';
 
 const fontDir = join(dirname(createRequire(import.meta.url).resolve('@fontsource/source-sans-3/package.json')), 'files');
 
@@ -35,8 +36,18 @@ export function pdfToBuffer(doc: PdfDocument): Promise<Buffer> {
   });
 }
 
-/** Writes "Page n of m" and a footer line on every buffered page (call before pdfToBuffer). */
-export function addPageFooters(doc: PdfDocument, footer: string): void {
+/** When the document was made, on the clock of the site it is about. */
+export interface MadeAt {
+  at: Date | string | number;
+  timeZone: string;
+}
+
+/**
+ * Writes "<label> · Made by Vialyard on <site time>" and "Page n of m" on every buffered page (call before
+ * pdfToBuffer): one wording in every PDF, so the label should not name Vialyard again.
+ */
+export function addPageFooters(doc: PdfDocument, label: string, made: MadeAt): void {
+  const footer = `${label} · ${madeByVialyard(made.at, made.timeZone)}`;
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
@@ -48,4 +59,9 @@ export function addPageFooters(doc: PdfDocument, footer: string): void {
     doc.text(`Page ${i - range.start + 1} of ${range.count}`, doc.page.width - 150, bottom, { width: 100, align: 'right', lineBreak: false });
     doc.page.margins.bottom = savedMargin;
   }
+}
+
+/** Starts a new page when `height` points would not fit above the bottom margin (a block that must stay whole). */
+export function keepTogether(doc: PdfDocument, height: number): void {
+  if (doc.y + height > doc.page.height - doc.page.margins.bottom) doc.addPage();
 }

@@ -3,13 +3,16 @@ import { readFile } from 'node:fs/promises';
 import { indicatorLabels, outcomeLabels, readingPlaceLabels } from '../../shared/receiving/arrival-checks.js';
 import { lineDifference } from '../../shared/receiving/line-counts.js';
 import type { ShipmentView } from '../../shared/receiving/shipment-view.js';
-import { addPageFooters, createPdf, pdfFonts, pdfToBuffer, type PdfDocument } from '../pdf/pdf-document.js';
+import { addPageFooters, createPdf, keepTogether, pdfFonts, pdfToBuffer, type PdfDocument } from '../pdf/pdf-document.js';
+import { formatSiteTime } from '../pdf/site-time.js';
 import type { PhotoStore } from '../photos/photo-store.js';
 import { ShipmentPhoto } from '../../database/models/index.js';
 import { drawTable } from './report-table.js';
-import { formatSiteTime } from './site-time.js';
 
 const yesNo = (value: boolean) => (value ? 'Yes' : 'No');
+
+const heldHeading = 'Lots on hold: do not use';
+const heldCaution = 'Keep these vials refrigerated and do not use them until the flock veterinarian decides. The product label and the veterinarian govern; Vialyard only records.';
 
 function heading(doc: PdfDocument, text: string): void {
   if (doc.y > doc.page.height - doc.page.margins.bottom - 60) doc.addPage();
@@ -31,6 +34,33 @@ function lineResult(line: ShipmentView['lines'][number]): string {
   if (!line.accepted) return 'Refused';
   const stocked = line.vialsStocked ? `${line.vialsStocked} into ${line.fridgeName ?? 'stock'}` : 'None into stock';
   return line.holds.length ? `ON HOLD\n${stocked}` : stocked;
+}
+
+/**
+ * The held lots and the caution after them go on one page: a caution alone at the top of the next page reads as
+ * a stray sentence. When the whole block is taller than a page, the last lot and the caution still stay together.
+ */
+function drawHeldLots(doc: PdfDocument, held: ShipmentView['lines']): void {
+  const bullets = held.map((line) => `•  Lot ${line.lotNumber} (${line.label}): ${line.holds.map((h) => h.reason).join(' ')}`);
+  const width = doc.page.width - doc.page.margins.left - doc.page.margins.right;
+  doc.font(pdfFonts.regular).fontSize(10);
+  const gapBefore = 0.4 * doc.currentLineHeight(true);
+  const bulletHeights = bullets.map((bullet) => doc.heightOfString(bullet, { width, indent: 6 }));
+  const gapBeforeCaution = 0.3 * doc.currentLineHeight(true);
+  const caution = doc.font(pdfFonts.italic).heightOfString(heldCaution, { width }) + gapBeforeCaution;
+  doc.font(pdfFonts.bold).fontSize(12);
+  const title = doc.heightOfString(heldHeading, { width }) + 0.3 * doc.currentLineHeight(true);
+  // A few points spare for pdfkit's rounding of line positions.
+  const spare = 4;
+  const whole = gapBefore + title + bulletHeights.reduce((sum, h) => sum + h, 0) + caution + spare;
+  if (whole <= doc.page.height - doc.page.margins.top - doc.page.margins.bottom) keepTogether(doc, whole);
+  heading(doc, heldHeading);
+  bullets.forEach((bullet, i) => {
+    if (i === bullets.length - 1) keepTogether(doc, bulletHeights[i]! + caution + spare);
+    doc.text(bullet, doc.page.margins.left, doc.y, { indent: 6 });
+  });
+  doc.moveDown(0.3).font(pdfFonts.italic).text(heldCaution);
+  doc.font(pdfFonts.regular);
 }
 
 async function drawPhotos(doc: PdfDocument, shipment: ShipmentView, store: PhotoStore): Promise<void> {
@@ -126,15 +156,8 @@ export async function discrepancyReportPdf(shipment: ShipmentView, store: PhotoS
   }
 
   const held = shipment.lines.filter((line) => line.holds.length);
-  if (held.length) {
-    heading(doc, 'Lots on hold: do not use');
-    for (const line of held) doc.text(`•  Lot ${line.lotNumber} (${line.label}): ${line.holds.map((h) => h.reason).join(' ')}`, { indent: 6 });
-    doc.moveDown(0.3).font(pdfFonts.italic).text(
-      'Keep these vials refrigerated and do not use them until the flock veterinarian decides. The product label and the veterinarian govern; Vialyard only records.',
-    );
-    doc.font(pdfFonts.regular);
-  }
+  if (held.length) drawHeldLots(doc, held);
   await drawPhotos(doc, shipment, store);
-  addPageFooters(doc, `Vialyard discrepancy report · shipment ${shipment.id} · generated ${formatSiteTime(generatedAt, zone)}`);
+  addPageFooters(doc, `Discrepancy report · shipment ${shipment.id}`, { at: generatedAt, timeZone: zone });
   return pdfToBuffer(doc);
 }

@@ -7,7 +7,7 @@ import type { AppContext } from '../app-context.js';
 import { PhotoStore } from '../photos/photo-store.js';
 import { discrepancyReportPdf } from './discrepancy-report.js';
 import { loadShipmentView } from './shipment-views.js';
-import { formatSiteTime } from './site-time.js';
+import { formatSiteTime } from '../pdf/site-time.js';
 
 export async function reportRecipients(shipment: ShipmentView): Promise<string[]> {
   const onSite = (await UserSite.findAll({ where: { siteId: shipment.siteId }, attributes: ['userId'] })).map((row) => row.userId);

@@ -6,6 +6,7 @@ import { historyCsv, type HistoryRow } from '../../shared/vaccination-day/histor
 import type { AppContext } from '../app-context.js';
 import { AppError } from '../http/app-error.js';
 import { addPageFooters, createPdf, pdfFonts, pdfToBuffer } from '../pdf/pdf-document.js';
+import { formatSiteTime } from '../pdf/site-time.js';
 import { recordSignatureMeaning } from './record-service.js';
 
 interface RecordRow {
@@ -62,10 +63,9 @@ export async function flockHistoryCsv(context: AppContext, flockId: number): Pro
   return { fileName: `vaccinations-${flock.name.replace(/[^A-Za-z0-9-]+/g, '-')}.csv`, csv: historyCsv(rows) };
 }
 
-const time = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
-
-export async function flockHistoryPdf(context: AppContext, flockId: number): Promise<{ fileName: string; pdf: Buffer }> {
+export async function flockHistoryPdf(context: AppContext, flockId: number, now = new Date()): Promise<{ fileName: string; pdf: Buffer }> {
   const { flock, site, rows } = await flockHistory(context, flockId);
+  const time = (iso: string) => formatSiteTime(iso, site.timeZone);
   const doc = createPdf({ title: `Vaccination record: flock ${flock.name}`, subject: 'Vaccination history for audits' });
   doc.font(pdfFonts.bold).fontSize(20).text('Vaccination record');
   doc.font(pdfFonts.regular).fontSize(12).text(`Flock ${flock.name} · ${site.name} · hatched ${flock.hatchDate} · placed ${flock.placementDate} · ${flock.birdsPlaced.toLocaleString('en-US')} birds placed`);
@@ -80,6 +80,6 @@ export async function flockHistoryPdf(context: AppContext, flockId: number): Pro
       .text(`Deviations: ${row.deviations || 'none'}`)
       .text(`Signed by ${row.crewLead} on ${time(row.signedAt)}: "${recordSignatureMeaning}"`);
   }
-  addPageFooters(doc, `Vialyard vaccination record · flock ${flock.name}`);
+  addPageFooters(doc, `Vaccination record · flock ${flock.name}`, { at: now, timeZone: site.timeZone });
   return { fileName: `vaccination-record-${flock.name.replace(/[^A-Za-z0-9-]+/g, '-')}.pdf`, pdf: await pdfToBuffer(doc) };
 }

@@ -2,10 +2,12 @@
 import { followLabel, mixingCautions } from '../../shared/vaccination-day/mixing-cautions.js';
 import type { RunView } from '../../shared/vaccination-day/day-views.js';
 import { addPageFooters, createPdf, pdfFonts, pdfToBuffer } from '../pdf/pdf-document.js';
+import { formatSiteClock } from '../pdf/site-time.js';
 
 const n = (value: number) => value.toLocaleString('en-US');
 
-export async function mixingSheetPdf(run: RunView): Promise<Buffer> {
+export async function mixingSheetPdf(run: RunView, now = new Date()): Promise<Buffer> {
+  const clock = (iso: string) => formatSiteClock(iso, run.timeZone);
   const doc = createPdf({ title: `Mixing sheet: ${run.flockName}, ${run.plannedDate}`, subject: 'Vaccination day mixing sheet' });
   doc.font(pdfFonts.bold).fontSize(20).text('Mixing sheet');
   doc.font(pdfFonts.regular).fontSize(12)
@@ -29,12 +31,12 @@ export async function mixingSheetPdf(run: RunView): Promise<Buffer> {
   doc.font(pdfFonts.regular).text(
     run.useWithinMinutes === null
       ? 'The label\'s use-within time is not recorded: read it on the label before mixing.'
-      : `${run.useWithinMinutes} minutes from mixing${run.useBy ? ` (mixed ${run.mixedAt!.slice(11, 16)} UTC, use by ${run.useBy.slice(11, 16)} UTC)` : '. Mixed at: ________  Use by: ________'}.`,
+      : `${run.useWithinMinutes} minutes from mixing${run.useBy ? ` (mixed ${clock(run.mixedAt!)}, use by ${clock(run.useBy)})` : '. Mixed at: ________  Use by: ________'}.`,
   );
   doc.moveDown().font(pdfFonts.semibold).text('Cautions');
   doc.font(pdfFonts.regular);
   for (const caution of mixingCautions) doc.text(`• ${caution}`);
   doc.moveDown().font(pdfFonts.bold).text(followLabel);
-  addPageFooters(doc, `Vialyard mixing sheet · vaccination ${run.vaccinationId}`);
+  addPageFooters(doc, `Mixing sheet · vaccination ${run.vaccinationId}`, { at: now, timeZone: run.timeZone });
   return pdfToBuffer(doc);
 }

@@ -48,9 +48,13 @@ describe('purchase orders from suggestions', () => {
     const attachment = mail[0]!.attachments[0]!;
     expect(attachment).to.include({ contentType: 'application/pdf', filename: `purchase-order-${before.nextReference}.pdf` });
     const text = pdfText(attachment.content);
-    for (const expected of ['Purchase order', before.nextReference, site.name, supplier.name, `Deliver by ${siteDay(site, 5)}`, 'Spray vaccine A, 20,000 doses × 10 vials', '200,000', '2,500.00', 'store at 35–45 °F', 'Deliver to the service building.']) {
+    for (const expected of ['Purchase order', before.nextReference, site.name, supplier.name, `Deliver by ${siteDay(site, 5)}`, 'Spray vaccine A, 20,000 doses × 10 vials', '200,000', 'store at 35–45 °F', 'Deliver to the service building.']) {
       expect(text, expected).to.contain(expected);
     }
+    // Money as the app shows it (CurrencyPipe, en-US, USD): $250.00 a vial × 10 vials = $2,500.00 (hand-computed).
+    expect(text).to.match(/\$250\.00\s+\$2,500\.00/);
+    expect(text).to.contain('Total $2,500.00');
+    expect(text).to.match(new RegExp(`Purchase order ${before.nextReference} · ${site.name} · Made by Vialyard on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d C[SD]T`));
     expect(await inkShare(firstPagePng(attachment.content)), 'the first page is not blank').to.be.greaterThan(0.005);
 
     expect(await PurchaseOrderSending.count()).to.equal(1);

@@ -148,6 +148,23 @@ describe('the do-not-use tag', () => {
     expect(await inkShare(firstPagePng(response.body as Buffer))).to.be.greaterThan(0.01);
   });
 
+  it('dates the hold on the site’s clock with the zone’s name, and ends with the one footer wording', async () => {
+    const site = await createSite('TAG', 'America/Denver');
+    const lot = await stockLot(await createSiteFridge(site), await createPresentation(await createProduct(), 1000), 5, '2030-01-31');
+    await Hold.create({ lotId: lot.id, cause: 'excursion', sourceKind: 'test', sourceId: 3, reason: 'fridge excursion', openedBy: null, openedAt: new Date('2026-12-04T18:58:00Z') });
+    const storage = await signInAs(['storage']);
+    const response = await storage.agent.get(`/api/holds/lots/${lot.id}/tag`).buffer(true).parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => done(null, Buffer.concat(chunks)));
+    }).expect(200);
+    const text = pdfText(response.body as Buffer);
+    // 18:58 UTC is 11:58 in Denver, on MST (UTC−7) in December (hand-converted).
+    expect(text).to.contain('On hold since 2026-12-04 11:58 MST');
+    expect(text).to.not.match(/UTC/);
+    expect(text).to.match(new RegExp(`Do-not-use tag · lot ${lot.lotNumber} · Made by Vialyard on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d M[SD]T`));
+  });
+
   it('is refused for a lot with every hold released (409)', async () => {
     const { lot, first, second } = await heldLot();
     const vet = await signInAs(['veterinarian']);

@@ -108,12 +108,21 @@ describe('troubleshooting record and excursion report', () => {
     const text = pdfText(pdf);
     expect(text).to.include('Excursion report');
     expect(text).to.match(/Minutes outside: 40/);
-    expect(text).to.match(/Peak \(highest\): 9\.0 °C/);
-    expect(text).to.match(/Degree-minutes: 71\.1 °C·min/);
-    // 24 h ending at T0+80 min: 23 h 20 min at 4 °C and 40 min at 9 °C; MKT ≈ 4.19 °C (hand-computed with ΔH/R = 10,000 K, USP ⟨1160⟩).
-    expect(text).to.match(/MKT, 24 h ending at the end: 4\.2 °C/);
+    // The veterinarian reads °F (the default): °F first, °C in brackets. 9 °C = 48.2 °F (NIST SP 811).
+    expect(text).to.match(/Peak \(highest\): 48\.2 °F \(9\.0 °C\)/);
+    // A temperature difference: 71.1 °C·min × 1.8 = 128.0 °F·min, no 32 added (hand-computed, NIST SP 811 §4.2.1.1).
+    expect(text).to.match(/Degree-minutes: 128\.0 °F·min \(71\.1 °C·min\)/);
+    // 24 h ending at T0+80 min: 23 h 20 min at 4 °C and 40 min at 9 °C; MKT ≈ 4.19 °C = 39.54 °F (hand-computed with ΔH/R = 10,000 K, USP ⟨1160⟩).
+    expect(text).to.match(/MKT, 24 h ending at the end: 39\.5 °F \(4\.2 °C\)/);
+    // The chart's axis in the reader's unit: 34 to 50 °F in steps of 2 (the data 39.2–48.2 °F, the limits 35 and 45 °F).
+    expect(text).to.match(/^\s*50 °F\s*$/m);
+    // On the site's clock (Chicago, CST): T0 = 08:00 UTC = 02:00 CST; the warm readings from T0+40 min, ending at T0+80 min (hand-converted).
+    expect(text).to.match(/Start: 2026-03-01 02:40 CST/);
+    expect(text).to.match(/End: 2026-03-01 03:20 CST/);
+    expect(text).to.match(/Excursion report \d+ · Fridge \d+ · Made by Vialyard on \d{4}-\d\d-\d\d \d\d:\d\d C[SD]T/);
+    expect(text).to.not.match(/UTC/);
     expect(text).to.include(lot.lotNumber);
-    expect(text).to.match(/12 vials, 12,000 doses/);
+    expect(text).to.match(/1 lot; at risk: 12 vials, 12,000 doses/);
     expect(text).to.include('Door left ajar after the morning delivery.');
     expect(text).to.include('Dr. Report Signer');
     expect(text).to.include('Release with condition (Use first, within a week)');
@@ -125,5 +134,17 @@ describe('troubleshooting record and excursion report', () => {
     writeFileSync(join(dir, 'excursion-report-page-1.png'), firstPagePng(pdf, 80));
     writeFileSync(join(dir, 'excursion-report.pdf'), pdf);
     expect(await Hold.count()).to.equal(1);
+
+    // A reader on °C gets °C first, °F in brackets.
+    await vet.user.update({ displayUnit: 'C' });
+    const inCelsius = await vet.agent.get(`/api/holds/events/${eventId}/report.pdf`).buffer(true).parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => done(null, Buffer.concat(chunks)));
+    }).expect(200);
+    const celsiusText = pdfText(inCelsius.body as Buffer);
+    expect(celsiusText).to.match(/Degree-minutes: 71\.1 °C·min \(128\.0 °F·min\)/);
+    expect(celsiusText).to.match(/Peak \(highest\): 9\.0 °C \(48\.2 °F\)/);
+    expect(celsiusText).to.match(/^\s*10 °C\s*$/m);
   });
 });

@@ -6,6 +6,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { Shipment } from '../../../database/models/index.js';
+import { discrepancyReportPdf } from '../../../api/shipments/discrepancy-report.js';
+import { loadShipmentView } from '../../../api/shipments/shipment-views.js';
+import type { PhotoStore } from '../../../api/photos/photo-store.js';
 import { resetDatabase } from '../../support/test-database.js';
 import { caughtMail, clearCaughtMail } from '../../support/mail-catcher.js';
 import { createSite, createTestUser, signInAs, testContext } from '../../support/test-app.js';
@@ -110,6 +113,39 @@ describe('the discrepancy report', () => {
     // A blank page is one flat colour; ours has text and ruled tables, so its channels vary.
     expect(stats.channels[0]!.stdev).to.be.above(10);
     expect(stats.channels[0]!.min).to.be.below(80);
+  });
+
+  it('keeps the closing caution on the page of the held lots before it, wherever the page ends', async function () {
+    this.timeout(60_000);
+    const { shipment } = await receiveWithDamage();
+    const view = await loadShipmentView(shipment.id);
+    // Without the refused line, the findings and the photos the held lots end the first page with a few lines to
+    // spare; longer and longer notes (a line each step, shorter than the caution's two) push them past its end.
+    const base = { ...view, lines: view.lines.filter((line) => line.holds.length), discrepancies: [], warnings: [], photos: [] };
+    const placements: number[] = [];
+    for (let lines = 0; lines <= 10; lines++) {
+      const notes = Array.from({ length: lines }, (_, i) => `Note line ${i + 1}.`).join('\n');
+      const pages = pdfText(await discrepancyReportPdf({ ...base, notes }, {} as PhotoStore, new Date('2026-12-04T18:58:00Z'))).split('\f');
+      const pageOf = (needle: string) => pages.findIndex((page) => page.includes(needle));
+      const heading = pageOf('Lots on hold: do not use');
+      expect(heading, `${lines} lines of notes`).to.be.at.least(0);
+      for (const part of ['Lot BW2207 (', 'Keep these vials refrigerated', 'govern; Vialyard only records.']) {
+        expect(pageOf(part), `${lines} lines of notes: "${part}"`).to.equal(heading);
+      }
+      placements.push(heading);
+    }
+    // The sweep crossed the page end: the block sat on the first page, then whole on the second.
+    expect(placements[0]).to.equal(0);
+    expect(placements[placements.length - 1]).to.equal(1);
+  });
+
+  it('ends every page with the one footer wording, on the site’s clock', async () => {
+    const { shipment } = await receiveWithDamage();
+    const view = await loadShipmentView(shipment.id);
+    const text = pdfText(await discrepancyReportPdf({ ...view, photos: [] }, {} as PhotoStore, new Date('2026-12-04T18:58:00Z')));
+    // 18:58 UTC is 12:58 CST in Chicago (hand-converted).
+    expect(text).to.contain(`Discrepancy report · shipment ${shipment.id} · Made by Vialyard on 2026-12-04 12:58 CST`);
+    expect(text).to.not.match(/UTC|generated/);
   });
 
   it('can be mailed again from the shipment page', async () => {

@@ -10,6 +10,7 @@ import { signInAs, testContext } from '../../support/test-app.js';
 import { firstPagePng, inkShare, pdfText } from '../../support/pdf-pages.js';
 import { testPassword } from '../../support/test-app.js';
 import { setUpDay, startDay, type DaySetup } from '../../support/vaccination-day-fixtures.js';
+import { loadRunView } from '../../../api/vaccination-day/run-view.js';
 import { makeJpeg } from '../../support/receiving-fixtures.js';
 
 const base = (day: DaySetup) => `/api/vaccination-day/vaccinations/${day.vaccination.id}`;
@@ -22,6 +23,14 @@ const binary = ((res: NodeJS.ReadableStream, done: (err: Error | null, body: Buf
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => done(null, Buffer.concat(chunks)));
 }) as unknown as Parameters<Test['parse']>[0];
+
+/** An instant on the test site's clock (Chicago) as Intl itself names it, apart from the server's formatter. */
+function chicago(iso: string): { date: string; clock: string } {
+  const format = new Intl.DateTimeFormat('en-US', { timeZone: 'America/Chicago', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' });
+  const parts = Object.fromEntries(format.formatToParts(new Date(iso)).map((p) => [p.type, p.value]));
+  return { date: `${parts.year}-${parts.month}-${parts.day}`, clock: `${parts.hour}:${parts.minute} ${parts.timeZoneName}` };
+}
+const onSiteClock = (iso: string) => `${chicago(iso).date} ${chicago(iso).clock}`;
 
 /** The day up to the record: trial, 10 + 1 vials issued, mixed, 1 unopened vial back. */
 async function runDay(day: DaySetup, options: { started?: boolean } = {}): Promise<void> {
@@ -137,6 +146,11 @@ describe('vaccination day: the record', () => {
     expect(sheetText).to.include('2,850 mL');
     expect(sheetText).to.include(`Lot ${day.lot.lotNumber}: 10 vials out`);
     expect(sheetText).to.include('60 minutes from mixing');
+    // Mixed and use-by on the site's clock with the zone's name, as every PDF prints times.
+    const run = await loadRunView(testContext(), day.vaccination.id);
+    expect(sheetText).to.include(`mixed ${chicago(run.mixedAt!).clock}, use by ${chicago(run.useBy!).clock}`);
+    expect(sheetText).to.match(new RegExp(`Mixing sheet · vaccination ${day.vaccination.id} · Made by Vialyard on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d C[SD]T`));
+    expect(sheetText).to.not.match(/UTC/);
     expect(sheetText).to.match(/distilled, non-chlorinated water/);
     expect(sheetText).to.match(/protective equipment/);
     expect(sheetText).to.include('Follow the label and the veterinarian.');
@@ -155,6 +169,12 @@ describe('vaccination day: the record', () => {
     expect(text).to.include(`Crew lead: ${day.lead.user.name}`);
     expect(text.replace(/\s+/g, ' ')).to.include('Tank dried: NOT done');
     expect(text).to.include('Tank left to dry overnight.');
+    const [signed] = await testContext().sequelize.query<{ started_at: Date; ended_at: Date; signed_at: Date }>('SELECT started_at, ended_at, signed_at FROM vaccination_records', { type: QueryTypes.SELECT });
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).to.include(`From ${onSiteClock(signed!.started_at.toISOString())} to ${onSiteClock(signed!.ended_at.toISOString())}`);
+    expect(flat).to.include(`on ${onSiteClock(signed!.signed_at.toISOString())}: "`);
+    expect(flat).to.match(/Vaccination record · flock .+ · Made by Vialyard on \d{4}-\d\d-\d\d \d\d:\d\d C[SD]T/);
+    expect(text).to.not.match(/UTC/);
     expect(await inkShare(firstPagePng(pdf.body as Buffer))).to.be.greaterThan(0.01);
 
     const csv = await day.lead.agent.get(`/api/vaccination-day/flocks/${flockId}/history.csv`).expect(200);
