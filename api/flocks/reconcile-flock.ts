@@ -36,7 +36,8 @@ export async function reconcileFlock(flockId: number, actorId: number, transacti
       entity: 'flock',
       entityId: flockId,
       before: { removed },
-      after: { created: created.map((v) => v.get({ plain: true })), updated: changes.update },
+      // Steps whose day had already passed are generated overdue: the entry says which, for whoever reads why they appeared.
+      after: { created: created.map((v) => v.get({ plain: true })), overdueStepIds: changes.create.filter((c) => c.overdue).map((c) => c.stepId), updated: changes.update },
     },
     transaction,
   );

@@ -38,6 +38,7 @@ export function toVaccinationView(vaccination: Vaccination, userNames: ReadonlyM
     plannedDate: vaccination.plannedDate,
     ageDays: ageInDays(flock.hatchDate, vaccination.plannedDate),
     status: vaccination.status,
+    programmeStepId: vaccination.programmeStepId,
     fromProgramme: vaccination.programmeStepId !== null,
     movedByHand: vaccination.movedByHand,
     notes: vaccination.notes,

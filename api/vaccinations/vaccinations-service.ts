@@ -95,8 +95,14 @@ export async function changeVaccination(context: AppContext, actorId: number, id
 
 export async function confirmVaccination(context: AppContext, actorId: number, id: number): Promise<VaccinationView> {
   return context.sequelize.transaction(async (transaction) => {
-    const { vaccination } = await lockOpenVaccination(id, transaction);
+    const { vaccination, flock } = await lockOpenVaccination(id, transaction);
     if (vaccination.status !== 'planned') throw AppError.conflict('This vaccination is already confirmed.');
+    // A confirmation promises the day to the crew; a day already gone cannot be promised, only planned again.
+    if (vaccination.plannedDate < flock.today) {
+      throw AppError.conflict(`Its day (${vaccination.plannedDate}) has passed: plan a new date first, or cancel it with a reason.`, [
+        { field: 'plannedDate', message: 'Overdue: choose a new date.' },
+      ]);
+    }
     const before = await loadVaccinationView(id, transaction);
     const { withdrawal } = before;
     if (withdrawal.blocksConfirmation) {

@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { isoDateField } from './iso-date-field.js';
 import type { BirdCountView } from './bird-count-schemas.js';
+import type { ScheduleEntry } from './flock-schedule.js';
 import type { FlockStatus } from './flock-status.js';
 import type { VaccinationView } from './vaccination-schemas.js';
 
@@ -52,12 +53,19 @@ export interface FlockSummary {
   status: FlockStatus;
   programmeId: number | null;
   programmeName: string | null;
+  /** The first open vaccination on or after today. */
   nextVaccination: { id: number; plannedDate: string; productName: string } | null;
+  /** Open vaccinations whose day passed with nothing recorded (none once the flock is depleted: those were missed). */
+  overdueVaccinations: number;
 }
 
 export interface FlockView extends FlockSummary {
+  /** Today on the site's calendar, which the states of the schedule are read against. */
+  today: string;
   houseCapacity: number | null;
   notes: string;
   birdCounts: BirdCountView[];
   vaccinations: VaccinationView[];
+  /** Every step of the programme and every vaccination, with its state (see shared/flocks/flock-schedule.ts). */
+  schedule: ScheduleEntry<VaccinationView>[];
 }

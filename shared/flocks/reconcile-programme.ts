@@ -27,8 +27,9 @@ export interface ReconcileVaccination {
 export interface ReconcileInput {
   readonly hatchDate: IsoDate;
   readonly placementDate: IsoDate;
-  /** Steps after this day are not generated (no vaccinating on or after depletion). */
+  /** Steps on or after this day are not generated (no vaccinating on or after depletion). */
   readonly lastDay: IsoDate | null;
+  /** The site's today: steps before it are still generated, marked overdue. */
   readonly today: IsoDate;
   /** The programme's steps, or none when the flock follows no programme. */
   readonly steps: readonly ReconcileStep[];
@@ -36,7 +37,8 @@ export interface ReconcileInput {
 }
 
 export interface ReconcileChanges {
-  create: { stepId: number; productId: number; route: ProductRoute; plannedDate: IsoDate; notes: string }[];
+  /** `overdue`: the step's day was already past today when it was generated. */
+  create: { stepId: number; productId: number; route: ProductRoute; plannedDate: IsoDate; notes: string; overdue: boolean }[];
   update: { id: number; productId: number; route: ProductRoute; plannedDate: IsoDate }[];
   /** Generated, still planned and never touched by hand: derived rows, safe to remove. */
   remove: number[];
@@ -49,15 +51,15 @@ function untouched(vaccination: ReconcileVaccination): boolean {
 
 /**
  * A step is generated when its date falls on or after placement (earlier steps belong to the hatchery or the
- * rearing farm), on or after today (the past is recorded, not planned), and before the last day.
+ * rearing farm) and before the last day. A step whose day already passed when the programme was applied is
+ * generated too, overdue: it may have been missed, so the flock's schedule shows it until someone plans it
+ * again or cancels it with a reason (leaving it out would hide a missed vaccination and its vaccine need).
  * A step that already has a vaccination of any status, cancelled included, is not generated again.
  */
 export function reconcileProgramme(input: ReconcileInput): ReconcileChanges {
   const changes: ReconcileChanges = { create: [], update: [], remove: [] };
   const stepsById = new Map(input.steps.map((step) => [step.id, step]));
   const inFlockLife = (date: IsoDate) => date >= input.placementDate && (input.lastDay === null || date < input.lastDay);
-  // An overdue planned vaccination stays (it may still be given); only new ones must lie ahead.
-  const worthCreating = (date: IsoDate) => inFlockLife(date) && date >= input.today;
   const handled = new Set<number>();
 
   for (const vaccination of input.existing) {
@@ -80,7 +82,9 @@ export function reconcileProgramme(input: ReconcileInput): ReconcileChanges {
   for (const step of input.steps) {
     if (handled.has(step.id)) continue;
     const plannedDate = stepDate(input.hatchDate, step);
-    if (worthCreating(plannedDate)) changes.create.push({ stepId: step.id, productId: step.productId, route: step.route, plannedDate, notes: step.notes });
+    if (inFlockLife(plannedDate)) {
+      changes.create.push({ stepId: step.id, productId: step.productId, route: step.route, plannedDate, notes: step.notes, overdue: plannedDate < input.today });
+    }
   }
   changes.create.sort((a, b) => (a.plannedDate < b.plannedDate ? -1 : a.plannedDate > b.plannedDate ? 1 : a.stepId - b.stepId));
   return changes;

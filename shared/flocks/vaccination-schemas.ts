@@ -78,6 +78,8 @@ export interface VaccinationView {
   /** The flock's age on the planned date, in days. */
   ageDays: number;
   status: VaccinationStatus;
+  /** The programme step it was generated from; null when added by hand (or its step was dropped). */
+  programmeStepId: number | null;
   fromProgramme: boolean;
   movedByHand: boolean;
   notes: string;

@@ -29,6 +29,14 @@ describe('server field errors beside their fields, in Chromium', () => {
     const page = await context.newPage();
     await signIn(page, suite.server.url, 'buyer@test.example');
     await page.goto(`${suite.server.url}/catalogue`);
+    // The pack's figures as the rest of the app shows them: thousands separated, the price in money and per vial (the
+    // stored unit price is per vial: stock values and order amounts are vials × it), the pack's price beside it.
+    const packs = page.getByRole('table', { name: 'Packs of Brightfield ND spray' });
+    await packs.waitFor();
+    expect(await packs.getByRole('columnheader').allInnerTexts()).to.include.members(['Price per vial', 'Price per pack']);
+    const cells = await packs.getByRole('row').nth(1).getByRole('cell').allInnerTexts();
+    expect([cells[0], cells[1], cells[4], cells[5]]).to.deep.equal(['1,000', '10', '$42.50', '$425.00']);
+    await page.screenshot({ path: screenshotPath('catalogue-packs') });
     await page.getByRole('button', { name: 'New product' }).click();
     const dialog = page.getByRole('dialog');
     await dialog.getByLabel('Name', { exact: true }).fill('Brightfield ND spray');

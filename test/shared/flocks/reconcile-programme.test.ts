@@ -22,10 +22,20 @@ describe('reconcileProgramme', () => {
     ]);
   });
 
-  it('skips steps before placement (the hatchery’s or rearing farm’s), before today, and on or after depletion', () => {
+  it('skips steps before placement (the hatchery’s or rearing farm’s) and on or after depletion', () => {
     const changes = reconcileProgramme({ ...base, placementDate: '2026-01-20', lastDay: '2026-01-29', steps: [step(1, 10), step(2, 4, 'weeks'), step(3, 25)] });
     expect(changes.create.map((c) => c.stepId)).to.deep.equal([3]);
-    expect(reconcileProgramme({ ...base, today: '2026-01-12' }).create.map((c) => c.stepId)).to.deep.equal([2]);
+  });
+
+  it('still generates a step whose day passed before the programme was applied, marked overdue, so a missed one shows', () => {
+    // Hand-computed: today 2026-01-12 is after day 10 (2026-01-11) and before week 4 (2026-01-29).
+    const changes = reconcileProgramme({ ...base, today: '2026-01-12' });
+    expect(changes.create.map((c) => [c.stepId, c.plannedDate, c.overdue])).to.deep.equal([
+      [1, '2026-01-11', true],
+      [2, '2026-01-29', false],
+    ]);
+    // Its own day is not overdue yet.
+    expect(reconcileProgramme({ ...base, today: '2026-01-11' }).create[0]!.overdue).to.equal(false);
   });
 
   it('is idempotent: a second run changes nothing', () => {

@@ -1,4 +1,5 @@
 // The catalogue for purchasing and admins: products with their packs, barcodes proposed at receiving to confirm, suppliers.
+import { CurrencyPipe, DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -22,7 +23,7 @@ import { SupplierDialog } from './supplier-dialog';
 
 @Component({
   selector: 'vy-catalogue',
-  imports: [MatTabsModule, MatTableModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatSlideToggleModule, RouterLink],
+  imports: [MatTabsModule, MatTableModule, MatButtonModule, MatIconModule, MatFormFieldModule, MatInputModule, MatSlideToggleModule, RouterLink, DecimalPipe, CurrencyPipe],
   templateUrl: './catalogue.html',
   styleUrl: './catalogue.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -63,8 +63,10 @@ function gtinShape(control: AbstractControl<string>): ValidationErrors | null {
           }
         </mat-form-field>
         <mat-form-field>
-          <mat-label>Price per pack</mat-label>
+          <mat-label>Price per vial</mat-label>
           <input matInput type="number" formControlName="unitPrice" min="0" step="0.01" />
+          <!-- Per vial, as purchasing reads it: stock values, expiry losses and order amounts are vials × this price. -->
+          <mat-hint>One vial's price; a pack costs this × the vials per pack.</mat-hint>
         </mat-form-field>
       </mat-dialog-content>
       <mat-dialog-actions align="end">

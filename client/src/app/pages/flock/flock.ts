@@ -1,4 +1,5 @@
-// One flock: its dates, age and birds, the bird-number history, and its vaccinations with the withdrawal flag and overrides.
+// One flock: its dates, age and birds, the bird-number history, and its vaccination schedule: every programme step with its
+// state (an overdue one stands out, to plan again or cancel), the withdrawal flag and overrides.
 import { DecimalPipe, DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, numberAttribute } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
@@ -15,8 +16,9 @@ import { productRouteLabels } from '@shared/catalogue/product-kinds.js';
 import { birdCountKindLabels } from '@shared/flocks/bird-count-kinds.js';
 import { ageLabel } from '@shared/flocks/flock-age.js';
 import { flockStatusLabels } from '@shared/flocks/flock-status.js';
+import type { ScheduleEntry } from '@shared/flocks/flock-schedule.js';
+import { scheduleStateLabels, type ScheduleState } from '@shared/flocks/schedule-states.js';
 import type { VaccinationView } from '@shared/flocks/vaccination-schemas.js';
-import { vaccinationStatusLabels, type VaccinationStatus } from '@shared/flocks/vaccination-statuses.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { FlockDialog, type FlockDialogData } from '../../shared/flocks/flock-dialog';
 import { FlocksApi } from '../../shared/flocks/flocks-api';
@@ -27,7 +29,19 @@ import { DepletionDialog } from './depletion-dialog';
 import { ReasonDialog, type ReasonDialogData } from './reason-dialog';
 import { VaccinationDialog, type VaccinationDialogData } from './vaccination-dialog';
 
-const statusTones: Record<VaccinationStatus, ChipTone> = { planned: 'neutral', confirmed: 'ok', done: 'ok', cancelled: 'neutral' };
+type Entry = ScheduleEntry<VaccinationView>;
+
+// Overdue and missed share the hold colour of the withdrawal flag: both need the veterinarian's eye.
+const stateTones: Record<ScheduleState, ChipTone> = {
+  planned: 'neutral',
+  confirmed: 'ok',
+  overdue: 'hold',
+  done: 'ok',
+  cancelled: 'neutral',
+  missed: 'hold',
+  before_placement: 'neutral',
+  after_depletion: 'neutral',
+};
 
 @Component({
   selector: 'vy-flock',
@@ -60,20 +74,26 @@ export class Flock {
     this.auth.user();
     return this.auth.hasRole('veterinarian');
   });
-  protected readonly open = computed(() => (this.flock.value()?.vaccinations ?? []).filter((v) => v.status !== 'cancelled'));
-  protected readonly cancelled = computed(() => (this.flock.value()?.vaccinations ?? []).filter((v) => v.status === 'cancelled'));
+  protected readonly overdue = computed(() => (this.flock.value()?.schedule ?? []).filter((e) => e.state === 'overdue'));
   protected readonly overrides = computed(() =>
     (this.flock.value()?.vaccinations ?? []).flatMap((v) => v.overrides.map((o) => ({ ...o, productName: v.productName }))),
   );
-  protected readonly vaccinationColumns = computed(() => ['date', 'age', 'product', 'route', 'status', 'withdrawal', ...(this.canKeep() ? ['actions'] : [])]);
+  // The state right after the date, so a phone shows it without scrolling the table sideways.
+  protected readonly vaccinationColumns = computed(() => ['date', 'state', 'step', 'product', 'age', 'route', 'withdrawal', ...(this.canKeep() ? ['actions'] : [])]);
   protected readonly countColumns = ['date', 'kind', 'birds', 'after', 'note', 'by'];
   protected readonly ageLabel = ageLabel;
   protected readonly routeLabels = productRouteLabels;
-  protected readonly statusLabels = vaccinationStatusLabels;
-  protected readonly statusTones = statusTones;
+  protected readonly stateLabels = scheduleStateLabels;
+  protected readonly stateTones = stateTones;
   protected readonly labelOf = labelOf;
   protected readonly flockStatusLabels = flockStatusLabels;
   protected readonly kindLabels = birdCountKindLabels;
+  protected readonly trackEntry = (_: number, entry: Entry) => entry.key;
+
+  /** Still to be given: the withdrawal flag matters only for these. */
+  protected isOpen(entry: Entry): boolean {
+    return entry.state === 'planned' || entry.state === 'confirmed' || entry.state === 'overdue';
+  }
 
   protected async editFlock(): Promise<void> {
     const flock = this.flock.value();
@@ -92,8 +112,24 @@ export class Flock {
   }
 
   protected editVaccination(vaccination: VaccinationView | null): void {
-    const data: VaccinationDialogData = { flockId: this.flockId(), vaccination };
+    const data: VaccinationDialogData = { flockId: this.flockId(), vaccination, overdue: null };
     this.dialog.open(VaccinationDialog, { data, width: '520px', maxWidth: '95vw' }).afterClosed().subscribe((saved) => saved && this.flock.reload());
+  }
+
+  /** An overdue vaccination planned again: the dialog starts on the site's today, the earliest day it may have. */
+  protected reschedule(entry: Entry): void {
+    const flock = this.flock.value();
+    if (!flock || !entry.vaccination) return;
+    const data: VaccinationDialogData = {
+      flockId: this.flockId(),
+      vaccination: entry.vaccination,
+      overdue: { stepLabel: entry.step?.label ?? null, daysLate: entry.daysLate, today: flock.today },
+    };
+    this.dialog.open(VaccinationDialog, { data, width: '520px', maxWidth: '95vw' }).afterClosed().subscribe((saved) => {
+      if (!saved) return;
+      this.snackBar.open(`${entry.productName} planned again.`, undefined, { duration: 4000 });
+      this.flock.reload();
+    });
   }
 
   protected async confirm(vaccination: VaccinationView): Promise<void> {
@@ -106,9 +142,13 @@ export class Flock {
   }
 
   protected cancel(vaccination: VaccinationView): void {
+    const flock = this.flock.value();
+    const overdue = flock !== undefined && vaccination.plannedDate < flock.today;
     const data: ReasonDialogData = {
-      title: `Cancel ${vaccination.productName} on ${vaccination.plannedDate}`,
-      intro: 'A cancelled vaccination stays in the flock’s record with its reason; the programme does not bring it back.',
+      title: `Cancel ${vaccination.productName} ${overdue ? 'due' : 'on'} ${vaccination.plannedDate}`,
+      intro:
+        'A cancelled vaccination stays on the flock’s schedule with its reason; the programme does not bring it back.' +
+        (overdue ? ' Say what happened: for example, given before the flock came to Vialyard, or left out on the veterinarian’s advice.' : ''),
       label: 'Reason',
       minLength: 1,
       action: 'Cancel vaccination',

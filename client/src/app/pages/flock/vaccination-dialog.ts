@@ -1,4 +1,5 @@
-// Add a vaccination to a flock by hand, or move a planned one to another day (a confirmed one then needs confirming again).
+// Add a vaccination to a flock by hand, move a planned one to another day (a confirmed one then needs confirming again),
+// or plan an overdue one again.
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
@@ -18,19 +19,27 @@ export interface VaccinationDialogData {
   flockId: number;
   /** Null to add one; a vaccination to move it. */
   vaccination: VaccinationView | null;
+  /** Set when the vaccination's day passed with nothing recorded: it is planned again, from the site's today on. */
+  overdue: { stepLabel: string | null; daysLate: number; today: string } | null;
 }
 
 @Component({
   selector: 'vy-vaccination-dialog',
   imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title>{{ data.vaccination ? 'Move ' + data.vaccination.productName : 'Add a vaccination' }}</h2>
+    <h2 mat-dialog-title>{{ title }}</h2>
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>
       <mat-dialog-content class="content">
         @if (formError(); as error) {
           <p class="form-error" role="alert">{{ error }}</p>
         }
-        @if (data.vaccination?.status === 'confirmed') {
+        @if (data.overdue; as overdue) {
+          <p class="notice">
+            {{ overdue.stepLabel ? 'The programme’s ' + overdue.stepLabel + ' step' : 'It' }} was due on {{ data.vaccination?.plannedDate }},
+            {{ overdue.daysLate }} {{ overdue.daysLate === 1 ? 'day' : 'days' }} ago, and nothing is recorded. Ask the flock veterinarian whether a
+            late dose still fits the flock’s age and the interval to the next step; the product label decides.
+          </p>
+        } @else if (data.vaccination?.status === 'confirmed') {
           <p class="notice">Moving it returns it to planned: it must be confirmed again for the new day.</p>
         }
         @if (!data.vaccination) {
@@ -58,7 +67,7 @@ export interface VaccinationDialogData {
         }
         <mat-form-field>
           <mat-label>Planned date</mat-label>
-          <input matInput type="date" formControlName="plannedDate" required />
+          <input matInput type="date" formControlName="plannedDate" [attr.min]="data.overdue?.today ?? null" required />
           @if (form.controls.plannedDate.invalid) {
             <mat-error>{{ message(form.controls.plannedDate) }}</mat-error>
           }
@@ -70,7 +79,7 @@ export interface VaccinationDialogData {
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" mat-dialog-close>Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="saving()">{{ data.vaccination ? 'Move' : 'Add vaccination' }}</button>
+        <button mat-flat-button type="submit" [disabled]="saving()">{{ data.overdue ? 'Plan' : data.vaccination ? 'Move' : 'Add vaccination' }}</button>
       </mat-dialog-actions>
     </form>
   `,
@@ -87,11 +96,17 @@ export class VaccinationDialog {
   protected readonly message = controlMessage;
   protected readonly saving = signal(false);
   protected readonly formError = signal<string | null>(null);
+  protected readonly title = this.data.overdue
+    ? `Plan ${this.data.vaccination!.productName} again`
+    : this.data.vaccination
+      ? `Move ${this.data.vaccination.productName}`
+      : 'Add a vaccination';
   private readonly fb = inject(NonNullableFormBuilder);
   protected readonly form = this.fb.group({
     productId: this.fb.control<number | null>(null, this.data.vaccination ? [] : [Validators.required]),
     route: ['spray' as ProductRoute],
-    plannedDate: [this.data.vaccination?.plannedDate ?? '', Validators.required],
+    // An overdue one starts on today: its own date is past, and the API plans nothing before today.
+    plannedDate: [this.data.overdue?.today ?? this.data.vaccination?.plannedDate ?? '', Validators.required],
     notes: [this.data.vaccination?.notes ?? ''],
   });
 

@@ -1,4 +1,4 @@
-// Flocks of a site with their age, birds and next vaccination, and the site's houses; keepers place flocks and add houses.
+// Flocks of a site with their age, birds, overdue and next vaccination, and the site's houses; keepers place flocks and add houses.
 import { ChangeDetectionStrategy, Component, computed, inject, linkedSignal, signal } from '@angular/core';
 import { rxResource, toSignal } from '@angular/core/rxjs-interop';
 import { DecimalPipe } from '@angular/common';
