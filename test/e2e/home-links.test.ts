@@ -10,6 +10,7 @@ import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser } from '../support/test-app.js';
 import { createFlock, createHouse, createPresentation, createProduct, createVaccination, siteDay } from '../support/flock-fixtures.js';
 import { createCatalogue, createPurchaseOrder } from '../support/receiving-fixtures.js';
+import { expectNoSidewaysScroll, phone } from '../support/phone-layout.js';
 
 describe('home card links in Chromium', () => {
   const suite = browserSuite();
@@ -54,5 +55,24 @@ describe('home card links in Chromium', () => {
     await receiving.getByRole('link', { name: bravo.name }).click();
     await page.waitForURL(new RegExp(`/receiving\\?site=${bravo.id}$`));
     await page.getByText(`Order ${order.reference}`).waitFor();
+  });
+
+  it('keeps the purchasing page of a site with wide tables within a phone screen (the tables scroll in their frames)', async () => {
+    const site = await createSite('PHN');
+    const product = await createProduct();
+    await createPresentation(product, 1000);
+    await createVaccination(await createFlock(await createHouse(site)), product, siteDay(site, 12));
+    await createTestUser({ email: 'phone-buyer@test.example', roles: ['purchasing'], sites: [site] });
+    const phoneContext = await suite.browser.newContext(phone);
+    try {
+      const page = await phoneContext.newPage();
+      await signInOnPage(page, suite.server.url, 'phone-buyer@test.example');
+      await page.goto(`${suite.server.url}/purchasing`);
+      await page.getByRole('table', { name: 'Orders to place' }).waitFor();
+      await page.getByRole('table', { name: 'Stock by product' }).waitFor();
+      await expectNoSidewaysScroll(page, 'purchasing');
+    } finally {
+      await phoneContext.close();
+    }
   });
 });
