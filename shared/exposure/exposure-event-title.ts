@@ -16,11 +16,17 @@ export function formatRange(range: { low: number; high: number; unit: 'F' | 'C' 
   return `${trim(range.low)}–${trim(range.high)} °${range.unit}`;
 }
 
+const toF = (c: number) => (c * 9) / 5 + 32;
+
+/**
+ * The title names the range in both scales (°C first, as stored): it is read in the queue, the report and mails by
+ * people who set either unit.
+ */
 export function exposureEventTitle(input: EventTitleInput): string {
   const where = input.source === 'daily_check' ? `${input.fridgeName}, daily check` : input.fridgeName;
-  if (input.cause === 'freeze') return `${where}: at or below 0 °C (freeze-sensitive products)`;
+  if (input.cause === 'freeze') return `${where}: at or below 0 °C / 32 °F (freeze-sensitive products)`;
   const side = input.kind === 'high' ? 'above' : 'below';
-  const range = `${trim(input.lowC)}–${trim(input.highC)} °C`;
+  const range = `${trim(input.lowC)}–${trim(input.highC)} °C / ${trim(toF(input.lowC))}–${trim(toF(input.highC))} °F`;
   const alarm = input.fridgeAlarmed ? '' : ' (inside the fridge\'s alarm range: product range only)';
   return `${where}: ${side} product range ${range}${alarm}`;
 }

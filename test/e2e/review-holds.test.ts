@@ -45,6 +45,12 @@ describe('automatic holds, the troubleshooting record, the report and the bell i
     await storage.getByRole('link', { name: 'Notifications, 1 unread' }).waitFor();
     await storage.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Review' }).click();
     await storage.getByRole('heading', { name: /^Fridge excursion · Fridge \d+: above the product range 35\.0 °F to 45\.0 °F$/ }).waitFor();
+    // Degree-minutes in the reader's °F: a temperature difference, × 1.8 with no 32 added (NIST SP 811 §4.2.1.1).
+    const queue = await (await storage.request.get(`${suite.server.url}/api/holds/queue`)).json();
+    const degreeMinutesC = queue.items[0].exposureEvent.degreeMinutesC as number;
+    expect(degreeMinutesC).to.be.above(0);
+    const shown = (degreeMinutesC * 1.8).toLocaleString('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+    await storage.getByText(`${shown} °F·min`, { exact: true }).waitFor();
     await storage.getByRole('button', { name: 'Fill in the troubleshooting record' }).click();
     const dialog = storage.getByRole('dialog');
     await dialog.getByLabel('Found by').waitFor();

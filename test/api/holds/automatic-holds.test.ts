@@ -41,7 +41,7 @@ describe('automatic excursion and freeze holds', () => {
     const vet = await signInAs(['veterinarian']);
     const queue = (await vet.agent.get('/api/holds/queue').expect(200)).body.items;
     expect(queue).to.have.length(1);
-    expect(queue[0].title).to.match(/above product range 2–6 °C \(inside the fridge's alarm range: product range only\)/);
+    expect(queue[0].title).to.match(/above product range 2–6 °C \/ 35\.6–42\.8 °F \(inside the fridge's alarm range: product range only\)/);
     expect(queue[0].exposureEvent).to.include({ minutes: 20, fridgeAlarmed: false });
     // Its times are shown on the clock of the fridge's site (createSite's default zone).
     expect(queue[0].timeZone).to.equal('America/Chicago');

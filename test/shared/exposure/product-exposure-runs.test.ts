@@ -68,8 +68,8 @@ describe('product exposure runs', () => {
 
   it('names an event by its fridge, side and range, and says when the fridge raised no alarm', () => {
     const base = { cause: 'excursion' as const, kind: 'high' as const, source: 'readings' as const, fridgeName: 'Fridge A', lowC: 2, highC: 6 };
-    expect(exposureEventTitle({ ...base, fridgeAlarmed: false })).to.equal('Fridge A: above product range 2–6 °C (inside the fridge\'s alarm range: product range only)');
-    expect(exposureEventTitle({ ...base, fridgeAlarmed: true, source: 'daily_check', kind: 'low' })).to.equal('Fridge A, daily check: below product range 2–6 °C');
-    expect(exposureEventTitle({ ...base, cause: 'freeze', fridgeAlarmed: true })).to.equal('Fridge A: at or below 0 °C (freeze-sensitive products)');
+    expect(exposureEventTitle({ ...base, fridgeAlarmed: false })).to.equal('Fridge A: above product range 2–6 °C / 35.6–42.8 °F (inside the fridge\'s alarm range: product range only)');
+    expect(exposureEventTitle({ ...base, fridgeAlarmed: true, source: 'daily_check', kind: 'low' })).to.equal('Fridge A, daily check: below product range 2–6 °C / 35.6–42.8 °F');
+    expect(exposureEventTitle({ ...base, cause: 'freeze', fridgeAlarmed: true })).to.equal('Fridge A: at or below 0 °C / 32 °F (freeze-sensitive products)');
   });
 });

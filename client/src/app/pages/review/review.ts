@@ -70,6 +70,14 @@ export class Review {
     return `${this.causeLabel(event)} · ${where}: ${what}${x.fridgeAlarmed ? '' : ' (no fridge alarm)'}`;
   }
 
+  /** Degrees beyond the limit × minutes, in the user's unit: a temperature difference, so °F is × 1.8 with no 32 added. */
+  protected degreeMinutes(valueC: number | null): string {
+    if (valueC === null) return '—';
+    const unit = this.auth.displayUnit();
+    const value = unit === 'F' ? valueC * 1.8 : valueC;
+    return `${value.toLocaleString(undefined, { minimumFractionDigits: 1, maximumFractionDigits: 1 })} °${unit}·min`;
+  }
+
   protected reportUrl(eventId: number): string {
     return `/api/holds/events/${eventId}/report.pdf`;
   }
