@@ -4,9 +4,10 @@ import type { Transaction } from 'sequelize';
 import { reconcileProgramme } from '../../shared/flocks/reconcile-programme.js';
 import { addDays } from '../../shared/planning/iso-date.js';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
+import { siteTime } from './demo-clock.js';
 import {
-  BirdCount, Flock, Fridge, House, Lot, Presentation, Product, ProductStockSetting, Programme, ProgrammeStep, PurchaseOrder, PurchaseOrderLine, Site, StockMovement, Supplier, User,
-  Vaccination,
+  BirdCount, Flock, Fridge, House, Lot, Presentation, Product, ProductStockSetting, Programme, ProgrammeStep, PurchaseOrder, PurchaseOrderLine, Site, StockCount, StockCountLine,
+  StockMovement, Supplier, User, Vaccination,
 } from '../models/index.js';
 
 type StepSpec = [productName: string, ageValue: number, ageUnit: 'days' | 'weeks', route: 'spray' | 'drinking_water' | 'wing_web' | 'injection', notes?: string];
@@ -49,18 +50,30 @@ const flocks = [
   { site: 'FCP', house: 'Pullet barn B', name: 'PB-2026-05', hatch: 40, placement: 40, birds: 18_000, depletion: 152, programme: 'Pullet rearing', losses: [] },
 ] as const;
 
-/** Opening stock counted into the fridges (an adjustment in), by pack doses and expiry in days from today. */
+/** Why a Larkmoor North step before today is closed: given, on the paper record of the time. */
+export const PAPER_RECORD = 'Given before Larkmoor North recorded vaccinations in Vialyard; see the paper record in the farm office.';
+
+/**
+ * Opening stock counted into the fridges (an adjustment in), by pack doses and expiry in days from today. TAE0611 is the
+ * lot the veterinarian releases on condition of using it first, at the next wing-web vaccination (barn A at 8 weeks,
+ * 26 days from today): it expires two weeks after that, so the condition can be met.
+ */
 const openingStock = [
   { site: 'LKN', fridge: 'LKN-F1', product: ND, doses: 5000, vials: 24, expiry: 240, lot: 'MND5120' },
   { site: 'LKN', fridge: 'LKN-F2', product: IB, doses: 2500, vials: 6, expiry: 20, lot: 'FIB0815' },
   { site: 'FCP', fridge: 'FCP-F1', product: ND, doses: 1000, vials: 60, expiry: 200, lot: 'MND4890' },
   { site: 'FCP', fridge: 'FCP-F1', product: IB, doses: 2500, vials: 40, expiry: 210, lot: 'FIB1203' },
-  { site: 'FCP', fridge: 'FCP-F2', product: AE, doses: 1000, vials: 10, expiry: 25, lot: 'TAE0611' },
+  { site: 'FCP', fridge: 'FCP-F2', product: AE, doses: 1000, vials: 10, expiry: 40, lot: 'TAE0611' },
   { site: 'FCP', fridge: 'FCP-F2', product: AE, doses: 1000, vials: 40, expiry: 320, lot: 'TAE0702' },
   { site: 'FCP', fridge: 'FCP-F1', product: EMULSION, doses: 1000, vials: 40, expiry: 300, lot: 'CNE0420' },
+  // Left over from the last flock's injections before lay; nothing needs the emulsion before it expires, so purchasing shows it lost.
+  { site: 'FCP', fridge: 'FCP-F1', product: EMULSION, doses: 1000, vials: 6, expiry: 30, lot: 'CNE0311' },
 ] as const;
 
-/** Twelve weeks of spray use at Larkmoor North, in vials of the lot below, oldest week first (the history a safety stock is proposed from). */
+/**
+ * Twelve weeks of spray use at Larkmoor North, in vials of the lot below, oldest week first (the history a safety stock is
+ * proposed from): one morning a week, the last a week ago, before the vaccine room fridge's warm spell held the lot.
+ */
 const HISTORY_LOT = 'MND5120';
 const weeklyUse = [4, 0, 3, 5, 0, 4, 2, 0, 5, 4, 3, 6];
 
@@ -101,21 +114,40 @@ export async function seedDemoFlocks(transaction: Transaction): Promise<void> {
     // The same generation the API runs when a flock gets its programme.
     const steps = await ProgrammeStep.findAll({ where: { programmeId: flock.programmeId! }, transaction });
     const { create } = reconcileProgramme({ hatchDate: flock.hatchDate, placementDate: flock.placementDate, lastDay: flock.plannedDepletionDate, today: today(spec.site), steps, existing: [] });
-    await Vaccination.bulkCreate(create.map((c) => ({ flockId: flock.id, programmeStepId: c.stepId, productId: c.productId, route: c.route, plannedDate: c.plannedDate, notes: c.notes, createdBy: buyer.id })), { transaction });
+    // It generates the steps already past as overdue. Larkmoor North's were given while its crew kept paper records
+    // (its first record in Vialyard is today's booster), so they are closed with that reason rather than shown as
+    // missed; Fennel Creek's past steps are told in demo-vaccination-day.ts.
+    const given = (c: (typeof create)[number]) => c.overdue && spec.site === 'LKN';
+    await Vaccination.bulkCreate(
+      create.map((c) => ({
+        flockId: flock.id, programmeStepId: c.stepId, productId: c.productId, route: c.route, plannedDate: c.plannedDate, notes: c.notes, createdBy: buyer.id,
+        ...(given(c) ? { status: 'cancelled' as const, cancelledBy: buyer.id, cancelledAt: new Date(), cancelReason: PAPER_RECORD } : {}),
+      })),
+      { transaction },
+    );
   }
 
   const packs = await Presentation.findAll({ transaction });
   const pack = (product: string, doses: number) => packs.find((p) => p.productId === productId(product) && p.dosesPerVial === doses)!;
   const lots = new Map<string, Lot>();
-  const countedAt = new Date(Date.now() - 13 * 7 * 86_400_000);
+  // Thirteen weeks ago, in the morning on each site's clock; the fridges' logger readings go back past it. Each fridge's
+  // opening count is a count record too, so the fridge pages date its last count from it (not "never counted").
+  const countedAt = (code: string) => siteTime(sites.get(code)!.timeZone, -13 * 7, '08:30');
+  const openingCounts = new Map<string, StockCount>();
   for (const stock of openingStock) {
     const fridge = (await Fridge.findOne({ where: { code: stock.fridge }, transaction }))!;
+    if (!openingCounts.has(stock.fridge)) {
+      openingCounts.set(stock.fridge, await StockCount.create({ fridgeId: fridge.id, countedBy: storage.id, countedAt: countedAt(stock.site), notes: 'Opening count.' }, { transaction }));
+    }
+    const count = openingCounts.get(stock.fridge)!;
     const lot = await Lot.create({ presentationId: pack(stock.product, stock.doses).id, lotNumber: stock.lot, expiry: addDays(today(stock.site), stock.expiry), createdBy: storage.id }, { transaction });
     lots.set(stock.lot, lot);
     // The history lot was counted with the vials it has issued since, so `vials` is what is on hand now.
     const issuedSince = stock.lot === HISTORY_LOT ? weeklyUse.reduce((sum, v) => sum + v, 0) : 0;
+    const counted = stock.vials + issuedSince;
+    await StockCountLine.create({ stockCountId: count.id, lotId: lot.id, expected: 0, counted, reason: 'Opening count' }, { transaction, fields: ['stockCountId', 'lotId', 'expected', 'counted', 'reason'] });
     await StockMovement.create(
-      { lotId: lot.id, kind: 'adjust', vials: stock.vials + issuedSince, fromFridgeId: null, toFridgeId: fridge.id, leftAt: null, at: countedAt, sourceKind: 'stock_count', sourceId: null, reason: 'Opening count', recordedBy: storage.id },
+      { lotId: lot.id, kind: 'adjust', vials: counted, fromFridgeId: null, toFridgeId: fridge.id, leftAt: null, at: count.countedAt, sourceKind: 'stock_count', sourceId: count.id, reason: 'Opening count', recordedBy: storage.id },
       { transaction },
     );
   }
@@ -123,18 +155,19 @@ export async function seedDemoFlocks(transaction: Transaction): Promise<void> {
   const roomFridge = (await Fridge.findOne({ where: { code: 'LKN-F1' }, transaction }))!;
   for (const [i, vials] of weeklyUse.entries()) {
     if (!vials) continue;
-    const at = new Date(Date.now() - (12 - i) * 7 * 86_400_000 + 2 * 86_400_000);
+    // Whole weeks back from today, so each falls in the week `weeklyDemand` counts it in (the last one 7 days ago).
+    const at = siteTime(sites.get('LKN')!.timeZone, -(12 - i) * 7, '06:40');
     await StockMovement.create(
       { lotId: lots.get(HISTORY_LOT)!.id, kind: 'issue', vials, fromFridgeId: roomFridge.id, toFridgeId: null, leftAt: new Date(at.getTime() - 20 * 60_000), at, sourceKind: 'demo_history', sourceId: null, reason: 'Vaccination (demo history)', recordedBy: storage.id },
       { transaction },
     );
   }
 
-  // An order already on its way covers the drinking-water vaccinations from February; December's stays short.
+  // An order already on its way covers the drinking-water vaccinations from about six weeks out; the nearer ones stay short.
   const coldline = (await Supplier.findOne({ where: { name: 'Coldline Farm Supply' }, transaction }))!;
   const north = sites.get('LKN')!;
   const order = await PurchaseOrder.create(
-    { siteId: north.id, supplierId: coldline.id, reference: 'PO-2615', expectedDate: addDays(today('LKN'), 40), carrier: 'Frostway Courier', notes: 'Drinking-water vaccine for the spring boosters.', createdBy: buyer.id },
+    { siteId: north.id, supplierId: coldline.id, reference: 'PO-2615', expectedDate: addDays(today('LKN'), 40), carrier: 'Frostway Courier', notes: 'Drinking-water vaccine for the next round of layer boosters.', createdBy: buyer.id },
     { transaction },
   );
   await PurchaseOrderLine.create({ purchaseOrderId: order.id, lineNo: 1, presentationId: pack(IB, 10_000).id, packs: 1 }, { transaction });

@@ -3,6 +3,8 @@ import { randomUUID } from 'node:crypto';
 import type { Transaction } from 'sequelize';
 import { gtinCheckDigit } from '../../shared/barcode/index.js';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
+import { siteTime } from './demo-clock.js';
+import { noticeHoldOpened } from './demo-hold-notice.js';
 import {
   Fridge, Hold, Lot, Presentation, Product, PurchaseOrder, PurchaseOrderLine, Shipment, ShipmentLine, Site, StockMovement, Supplier, User,
 } from '../models/index.js';
@@ -78,8 +80,9 @@ export async function seedDemoReceiving(transaction: Transaction): Promise<void>
   const delivered = await order(north, coldline, 'PO-2601', daysFrom(today, -6), [['110010', 2]], { status: 'received' });
   const warmOrder = await order(fennel, prairie, 'PO-2604', daysFrom(today, -3), [['120100', 1]], { status: 'received' });
 
-  // A clean delivery at Larkmoor North six days ago.
-  const arrived = new Date(Date.now() - 6 * 86_400_000);
+  // A clean delivery at Larkmoor North six days ago, first thing in the morning (its restock met the vaccine room
+  // fridge's warm spell, see demo-fridge-logs.ts).
+  const arrived = siteTime(north.timeZone, -6, '07:40');
   const clean = await Shipment.create(
     {
       siteId: north.id, purchaseOrderId: delivered.id, supplierId: coldline.id, clientKey: randomUUID(), carrier: 'Frostway Courier', trackingNumber: 'FW26010417',
@@ -97,8 +100,8 @@ export async function seedDemoReceiving(transaction: Transaction): Promise<void>
   );
   await StockMovement.create({ lotId: ndLot.id, kind: 'receive', vials: 20, toFridgeId: roomFridge.id, fromFridgeId: null, leftAt: null, at: storedAt, sourceKind: 'shipment_line', sourceId: cleanLine.id, recordedBy: clerk.id }, { transaction });
 
-  // A warm delivery at Fennel Creek three days ago: one vial broken, the lot held on arrival.
-  const warmArrived = new Date(Date.now() - 3 * 86_400_000);
+  // A warm delivery at Fennel Creek three days ago, late in the morning: one vial broken, the lot held on arrival.
+  const warmArrived = siteTime(fennel.timeZone, -3, '11:20');
   const warm = await Shipment.create(
     {
       siteId: fennel.id, purchaseOrderId: warmOrder.id, supplierId: prairie.id, clientKey: randomUUID(), carrier: 'Frostway Courier', trackingNumber: 'FW26040417',
@@ -117,11 +120,10 @@ export async function seedDemoReceiving(transaction: Transaction): Promise<void>
   );
   await StockMovement.create({ lotId: ibLot.id, kind: 'receive', vials: 9, toFridgeId: brooder.id, fromFridgeId: null, leftAt: null, at: warmStored, sourceKind: 'shipment_line', sourceId: warmLine.id, recordedBy: admin.id }, { transaction });
   // The hold dates from the delivery it was found at, as receiving's own would; the column's default is the seeding time.
-  await Hold.create(
-    {
-      lotId: ibLot.id, cause: 'arrival', sourceKind: 'shipment', sourceId: warm.id, reason: "The reading 49 °F is above Fernhollow IB drinking-water vaccine's label range 35–45 °F.",
-      openedBy: admin.id, openedAt: warmArrived,
-    },
-    { transaction },
-  );
+  const arrivalHold = {
+    lotId: ibLot.id, cause: 'arrival' as const, sourceKind: 'shipment', sourceId: warm.id, reason: "The reading 49 °F is above Fernhollow IB drinking-water vaccine's label range 35–45 °F.",
+    openedBy: admin.id, openedAt: warmArrived,
+  };
+  await Hold.create(arrivalHold, { transaction });
+  await noticeHoldOpened(transaction, arrivalHold);
 }

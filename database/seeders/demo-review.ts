@@ -13,10 +13,13 @@ import { importLogFile } from '../../api/log-imports/import-log-file.js';
 import { addCertificate } from '../../api/loggers/loggers-service.js';
 import { countSheet } from '../../api/stock-counts/count-sheet.js';
 import { submitCount } from '../../api/stock-counts/submit-count.js';
+import { celsiusToFahrenheit } from '../../shared/temperature/convert-temperature.js';
 import { ExposureEvent, Fridge, Hold, Lot, Logger, User } from '../models/index.js';
 import { projectRoot } from '../scripts/runtime-dir.js';
 import { demoAccounts } from './demo-scenario.js';
-import { certificatePdf, fahrenheitFile, readings, wobble } from './demo-fridge-logs.js';
+import { siteTime } from './demo-clock.js';
+import { openHoldsAtSpellStart, readingsAsStored } from './demo-excursion-holds.js';
+import { READINGS_SINCE_DAYS, certificatePdf, fahrenheitFile, readings, wobble } from './demo-fridge-logs.js';
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
@@ -34,16 +37,18 @@ async function userId(email: string): Promise<number> {
 }
 
 /**
- * Fennel Creek's shop fridge gets a logger and a week of readings with a short warm spell four days ago: the import's
- * recompute opens its excursion holds as in production, and the veterinarian has already signed a decision on each.
+ * Fennel Creek's shop fridge gets a logger and its readings since the lots came in, with a short warm spell four days ago
+ * in the morning: its holds open at the spell's start (demo-excursion-holds.ts), the import's recompute takes the event
+ * over as in production, and the veterinarian has already signed a decision on each.
  */
 async function decidedShopFridgeExcursion(sequelize: Sequelize, context: AppContext, now: number, uploadsDir: string, dir: string): Promise<void> {
   const shop = (await Fridge.findOne({ where: { code: 'FCP-F2' } }))!;
   const logger = await Logger.create({ fridgeId: shop.id, serial: 'FC2-5120', model: 'Probe logger', role: 'primary', installedOn: '2025-08-18' });
   const noise = wobble(5120);
-  const warm = { start: now - 4 * DAY + 9 * HOUR, end: now - 4 * DAY + 10.5 * HOUR };
+  const warmStart = siteTime('America/Denver', -4, '10:15').getTime();
+  const warm = { start: warmStart, end: warmStart + 1.5 * HOUR };
   const rows = readings({
-    start: now - 7 * DAY,
+    start: now - READINGS_SINCE_DAYS * DAY,
     end: now - 3 * HOUR,
     stepMinutes: 15,
     temp: (at) => (at >= warm.start && at <= warm.end ? 7.9 + 0.9 * Math.sin(((at - warm.start) / (warm.end - warm.start)) * Math.PI) : 4.4 + noise() * 0.5),
@@ -57,6 +62,7 @@ async function decidedShopFridgeExcursion(sequelize: Sequelize, context: AppCont
   const certificatePath = join(dir, `${logger.serial}.pdf`);
   await writeFile(certificatePath, certificate);
   await addCertificate(sequelize, storageId, logger.id, { calibratedOn, dueOn: DateTime.now().plus({ months: 20 }).toISODate()! }, { path: certificatePath, originalName: `${logger.serial}-calibration.pdf`, size: certificate.length }, uploadsDir);
+  await openHoldsAtSpellStart(sequelize, 'FCP-F2', readingsAsStored(rows, 'F'), storageId);
   await importLogFile(sequelize, { loggerId: logger.id, path, fileName: 'FC2-5120.csv', sizeBytes: Buffer.byteLength(body), actorId: storageId, source: 'upload', uploadsDir });
 
   const event = await ExposureEvent.findOne({ where: { fridgeId: shop.id, cause: 'excursion' }, order: [['id', 'ASC']] });
@@ -67,6 +73,8 @@ async function decidedShopFridgeExcursion(sequelize: Sequelize, context: AppCont
     minutesSinceInRange: 50, backInStorageAt: new Date(warm.end).toISOString(), contacted: 'Dr. Imani Castell, by phone.',
     preventiveAction: 'Boxes no longer stored against the door; door alarm checked.',
   });
+  // The decision's notes quote the event's own figures, so they agree with the holds' reasons.
+  const figures = `${Math.round(event.minutes ?? 0)} minutes just above the label range, peak ${celsiusToFahrenheit(event.peakC).toFixed(1)} °F`;
   const vet = account('vet@larkmoor.example');
   const vetId = await userId(vet.email);
   const holds = await Hold.findAll({ where: { sourceKind: 'exposure_event', sourceId: event.id } });
@@ -78,7 +86,7 @@ async function decidedShopFridgeExcursion(sequelize: Sequelize, context: AppCont
     await decideHold(context, vetId, hold.id, {
       decision: first ? 'release_with_condition' : 'release',
       condition: first ? 'Use first, at the next wing-web vaccination' : '',
-      notes: 'About 90 minutes just above the label range, peak under 49 °F; the label allows use (demo decision).',
+      notes: `${figures}; the label allows use (demo decision).`,
       password: vet.password,
       supersedesId: null,
     });

@@ -47,7 +47,8 @@ describe('the demo scenario for the review', function () {
     const signed = await HoldDecision.findAll();
     expect(signed.every((d) => d.signerName === 'Dr. Imani Castell' && d.signatureMeaning.length > 0)).to.equal(true);
     expect(signed.map((d) => d.decision).sort()).to.deep.equal(['release', 'release_with_condition']);
-    // The automatic holds came from the import's recompute, not from hand-written rows: no user opened them.
+    // The automatic holds are the ones the import's recompute would open (dated from each warm spell's start,
+    // demo-excursion-holds.ts): Vialyard opened them, no user did.
     const automatic = await Hold.findAll({ where: { sourceKind: 'exposure_event' } });
     expect(automatic.every((h) => h.openedBy === null && h.cause === 'excursion')).to.equal(true);
     const open = (await ExposureEvent.findByPk(undecided[0].event_id))!;
@@ -73,5 +74,8 @@ describe('the demo scenario for the review', function () {
     const states = await fridgeCountStates(testContext().sequelize, { siteIds: null });
     const due = states.filter((s) => s.due);
     expect(due.map((s) => s.fridgeCode)).to.deep.equal(['LKN-F1']);
+    // Counted when the stock was opened thirteen weeks ago, and a delivery came in since: never "never counted".
+    expect(due[0]!.reasons).to.include('received_since').and.not.include('never_counted');
+    expect(states.every((s) => s.lastCountAt !== null), 'every fridge has its opening count').to.equal(true);
   });
 });
