@@ -1,35 +1,16 @@
 // The demo scenario, seeded as `npm start` seeds it, leaves the review with work to show: undecided automatic holds
 // from a real log import, one event decided and signed, a troubleshooting record started, unread notifications for
 // the veterinarian and storage staff, and exactly one fridge whose stock count is due.
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { expect } from 'chai';
 import { QueryTypes } from 'sequelize';
-import { PasswordHasher } from '../../api/auth/password-hasher.js';
 import { fridgeCountStates } from '../../api/stock-counts/count-due-service.js';
 import { ExposureEvent, Hold, HoldDecision, Notification, Shipment, TroubleshootingRecord, User } from '../../database/models/index.js';
-import { seedDemoScenario } from '../../database/seeders/demo-scenario.js';
-import { resetDatabase } from '../support/test-database.js';
 import { testContext } from '../support/test-app.js';
+import { seedDemoForSuite } from '../support/demo-seed.js';
 
 describe('the demo scenario for the review', function () {
   this.timeout(180_000);
-  let uploads: string;
-  const previousUploads = process.env.UPLOADS_DIR;
-  before(async () => {
-    await resetDatabase();
-    uploads = await mkdtemp(join(tmpdir(), 'vialyard-demo-seed-'));
-    process.env.UPLOADS_DIR = uploads;
-    const hasher = new PasswordHasher(4);
-    expect(await seedDemoScenario(testContext().sequelize, (password) => hasher.hash(password))).to.equal(true);
-  });
-  after(async () => {
-    if (previousUploads === undefined) delete process.env.UPLOADS_DIR;
-    else process.env.UPLOADS_DIR = previousUploads;
-    await rm(uploads, { recursive: true, force: true });
-    await resetDatabase();
-  });
+  seedDemoForSuite('demo-seed');
 
   it('queues undecided exposure-event holds made by the import, and keeps one event decided and signed', async () => {
     const sequelize = testContext().sequelize;

@@ -1,13 +1,9 @@
 // The demo scenario, seeded as `npm start` seeds it, tells one story a farm would believe: holds date from what opened
 // them, a condition the veterinarian sets can be met, the fridges' readings cover the lots' time in storage, the day's
 // work happens at hours a farm keeps on the site's own clock, and each record is made by the role that makes it.
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { expect } from 'chai';
 import { DateTime } from 'luxon';
 import { QueryTypes } from 'sequelize';
-import { PasswordHasher } from '../../api/auth/password-hasher.js';
 import { loadProjectionInput } from '../../api/demand/projection-inputs.js';
 import { proposeSafetyStockFor } from '../../api/demand/safety-proposal-service.js';
 import { computeLotExposure } from '../../api/exposure/lot-exposure-service.js';
@@ -17,33 +13,19 @@ import {
   DailyCheck, ExposureEvent, Flock, Fridge, Hold, HoldDecision, Lot, Presentation, Product, Shipment, Site, StockMovement, TroubleshootingRecord, User,
 } from '../../database/models/index.js';
 import { PAPER_RECORD } from '../../database/seeders/demo-flocks.js';
-import { seedDemoScenario } from '../../database/seeders/demo-scenario.js';
-import { resetDatabase } from '../support/test-database.js';
 import { siteDay } from '../support/flock-fixtures.js';
 import { testContext } from '../support/test-app.js';
+import { seedDemoForSuite } from '../support/demo-seed.js';
 
 const HOUR = 3_600_000;
 const localHour = (at: Date, zone: string) => DateTime.fromJSDate(at, { zone }).hour + DateTime.fromJSDate(at, { zone }).minute / 60;
 
 describe('the demo scenario’s story', function () {
   this.timeout(180_000);
-  let uploads: string;
-  const previousUploads = process.env.UPLOADS_DIR;
   const zoneOfFridge = new Map<number, string>();
-  before(async () => {
-    await resetDatabase();
-    uploads = await mkdtemp(join(tmpdir(), 'vialyard-demo-story-'));
-    process.env.UPLOADS_DIR = uploads;
-    const hasher = new PasswordHasher(4);
-    expect(await seedDemoScenario(testContext().sequelize, (password) => hasher.hash(password))).to.equal(true);
+  seedDemoForSuite('demo-story', async () => {
     const sites = new Map((await Site.findAll()).map((s) => [s.id, s.timeZone]));
     for (const fridge of await Fridge.findAll()) zoneOfFridge.set(fridge.id, sites.get(fridge.siteId)!);
-  });
-  after(async () => {
-    if (previousUploads === undefined) delete process.env.UPLOADS_DIR;
-    else process.env.UPLOADS_DIR = previousUploads;
-    await rm(uploads, { recursive: true, force: true });
-    await resetDatabase();
   });
 
   it('dates each excursion hold from its event’s start, with the reason and figures the import computed', async () => {

@@ -1,35 +1,16 @@
 // In Chromium, on the seeded demo: the hold the warm delivery opened says it was opened when the shipment arrived
 // (three days before the seeding), as receiving's own hold would.
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { expect } from 'chai';
-import { PasswordHasher } from '../../api/auth/password-hasher.js';
 import { Lot, Shipment, Site } from '../../database/models/index.js';
-import { demoAccounts, seedDemoScenario } from '../../database/seeders/demo-scenario.js';
+import { demoAccounts } from '../../database/seeders/demo-scenario.js';
 import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
-import { resetDatabase } from '../support/test-database.js';
-import { testContext } from '../support/test-app.js';
+import { seedDemoForSuite } from '../support/demo-seed.js';
 
 describe('the demo’s arrival hold in Chromium', function () {
   this.timeout(180_000);
   const suite = browserSuite();
-  let uploads: string;
-  const previousUploads = process.env.UPLOADS_DIR;
-  before(async () => {
-    await resetDatabase();
-    uploads = await mkdtemp(join(tmpdir(), 'vialyard-demo-hold-'));
-    process.env.UPLOADS_DIR = uploads;
-    const hasher = new PasswordHasher(4);
-    expect(await seedDemoScenario(testContext().sequelize, (password) => hasher.hash(password))).to.equal(true);
-  });
-  after(async () => {
-    if (previousUploads === undefined) delete process.env.UPLOADS_DIR;
-    else process.env.UPLOADS_DIR = previousUploads;
-    await rm(uploads, { recursive: true, force: true });
-    await resetDatabase();
-  });
+  seedDemoForSuite('demo-hold');
 
   it('shows the hold on lot FIB0932 opened at the delivery’s arrival, not at the seeding', async () => {
     const warm = (await Shipment.findOne({ where: { trackingNumber: 'FW26040417' } }))!;

@@ -1,22 +1,16 @@
 // The demo's vaccination day (database/seeders/demo-vaccination-day.ts): what `npm start` shows the crew lead and the veterinarian.
 import { expect } from 'chai';
-import { PasswordHasher } from '../../../api/auth/password-hasher.js';
-import { demoAccounts, seedDemoScenario } from '../../../database/seeders/demo-scenario.js';
+import { demoAccounts } from '../../../database/seeders/demo-scenario.js';
 import { Flock, Site } from '../../../database/models/index.js';
-import { resetDatabase } from '../../support/test-database.js';
-import { signIn, testContext } from '../../support/test-app.js';
+import { signIn } from '../../support/test-app.js';
+import { seedDemoForSuite } from '../../support/demo-seed.js';
 import { siteDay } from '../../support/flock-fixtures.js';
 
 const account = (email: string) => demoAccounts.find((a) => a.email === email)!;
 
 describe('demo data: the vaccination day', function () {
   this.timeout(60_000);
-  before(async () => {
-    await resetDatabase();
-    const hasher = new PasswordHasher(4);
-    expect(await seedDemoScenario(testContext().sequelize, (password) => hasher.hash(password))).to.equal(true);
-  });
-  after(resetDatabase);
+  seedDemoForSuite('demo-day');
 
   it('gives the crew lead today’s sheet with a vaccination on each site, water entered and vials to take', async () => {
     const crew = account('crew@larkmoor.example');
