@@ -1,7 +1,6 @@
 // A lot's exposure from the database: its ledger gives the stays, each fridge's loggers give the readings it lived through.
 import type { Sequelize } from 'sequelize';
-import { lotExposure, movementHistory, staysFromBalanceChanges, type FridgeReading, type LotExposure } from '../../shared/exposure/index.js';
-import { mergeBackupReadings } from '../../shared/logs/merge-backup-readings.js';
+import { fridgeExposureReadings, lotExposure, movementHistory, staysFromBalanceChanges, type FridgeReading, type LotExposure } from '../../shared/exposure/index.js';
 import { rangeInCelsius } from '../../shared/temperature/temperature-range.js';
 import { Fridge, Logger, Lot, Presentation, Product, StockMovement } from '../../database/models/index.js';
 import { AppError } from '../http/app-error.js';
@@ -50,7 +49,7 @@ export async function computeLotExposure(sequelize: Sequelize, lotId: number, as
       const to = Math.max(...fridgeStays.map((s) => s.to ?? asOf)) + hour;
       const loggers = await Logger.findAll({ where: { fridgeId }, attributes: ['id', 'role'], transaction });
       const loaded = await loadFridgeReadings(transaction, loggers.map((l) => ({ id: l.id, role: l.role })), from, to);
-      readings.set(fridgeId, mergeBackupReadings(loaded.primary, loaded.backup).readings.map((r) => ({ at: r.at, tempC: r.tempC })));
+      readings.set(fridgeId, fridgeExposureReadings(loaded.primary, loaded.backup));
     }
   });
   const range = { low: Number(product.storageLow), high: Number(product.storageHigh), unit: product.storageUnit };

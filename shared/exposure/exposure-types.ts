@@ -20,6 +20,11 @@ export interface TimeOut {
 export interface FridgeReading {
   at: number;
   tempC: number;
+  /**
+   * The time this reading stands for when its own logger's series says so (a backup reading filling the primary's
+   * gap stands for the backup's step, not the primary's); absent, the step to the next reading decides.
+   */
+  standsForMs?: number;
 }
 
 export interface ExposureInput {

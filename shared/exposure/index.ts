@@ -2,6 +2,7 @@
 export type {
   ExposureInput, FridgeReading, LotExcursion, LotExposure, Segment, Stay, TimeOut, TimeOutExposure, UnknownStretch,
 } from './exposure-types.js';
+export { fridgeExposureReadings } from './fridge-exposure-readings.js';
 export { lotExposure } from './lot-exposure.js';
 export { staySegments } from './stay-segments.js';
 export { unionLengthMs, type Interval } from './interval-union.js';

@@ -12,8 +12,9 @@ function unknownStretch(fridgeId: number, start: number, end: number, reason: Un
 }
 
 /**
- * Each reading stands for the time until the next (the log analysis's rule, gaps included); the parts of
- * [from, to) no reading stands for are unknown, never assumed fine.
+ * Each reading stands for the time until the next (the log analysis's rule, gaps included), or for its own
+ * `standsForMs` where the merge of primary and backup set it; the parts of [from, to) no reading stands for are
+ * unknown, never assumed fine.
  */
 export function staySegments(fridgeId: number, readings: readonly FridgeReading[], from: number, to: number): StaySegments {
   const segments: Segment[] = [];

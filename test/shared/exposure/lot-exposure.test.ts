@@ -1,6 +1,6 @@
 // Lot exposure on hand-computed cases: the vials' stays joined with each fridge's readings, judged by the product's own range.
 import { expect } from 'chai';
-import { lotExposure } from '../../../shared/exposure/index.js';
+import { fridgeExposureReadings, lotExposure } from '../../../shared/exposure/index.js';
 import type { ExposureInput, FridgeReading } from '../../../shared/exposure/index.js';
 
 const minute = 60_000;
@@ -129,6 +129,39 @@ describe('lot exposure', () => {
     expect(result.minutesAbove).to.equal(60);
     expect(result.storageMinutes).to.equal(60);
     expect(result.maxC).to.equal(10);
+  });
+
+  it('a 3-hour primary outage filled by a 30-minute backup: each backup reading stands for 30 minutes, nothing unknown (hand-computed)', () => {
+    // Primary every 10 min at 10:00–11:00 and 14:10–14:50 (5 °C): its 11:00 reading stands for one step, so its gap is
+    // 11:10–14:10 (3 h). The backup reads every 30 min from 10:10; 11:10, 11:40, …, 13:40 fall in the gap and stand for
+    // 30 min each, 6 × 30 = 180 min: 12:10 and 12:40 read 9 °C, so 12:10–13:10 is 60 min above a 2–8 °C label.
+    const primary = [...series(0, 10, Array(7).fill(5)), ...series(250, 10, Array(5).fill(5))];
+    const backup = series(10, 30, [5, 5, 5, 5, 9, 9, 5, 5, 5, 5]);
+    const readings = new Map([[1, fridgeExposureReadings(primary, backup)]]);
+    const result = lotExposure(input({ stays: [{ fridgeId: 1, from: at(0), to: at(300) }], readings }));
+    expect(result.minutesUnknown).to.equal(0);
+    expect(result.unknown).to.deep.equal([]);
+    expect(result.storageMinutes).to.equal(300);
+    expect(result.minutesAbove).to.equal(60);
+    expect(result.minutesBelow).to.equal(0);
+    expect(result.excursions).to.have.length(1);
+    expect(result.excursions[0]).to.include({ kind: 'high', start: at(130), end: at(190), minutes: 60, peakC: 9 });
+    // The MKT of storage weighs each backup reading by its 30 minutes: 60 of 300 minutes at 9 °C, 240 at 5 °C gives
+    // 5.969 °C (computed from USP ⟨1160⟩, ΔH/R = 10,000 K).
+    expect(result.mktStorageC).to.be.closeTo(5.969, 0.001);
+  });
+
+  it('a backup reading stands for no more than the usual maximum gap rule allows: a hole in the backup stays unknown (hand-computed)', () => {
+    // Same primary outage 11:10–14:10; the backup reads at 11:10, 11:40, then not until 13:40. Its own series'
+    // nominal step is 30 min and a step over two intervals stands for one (readingDurations): 11:40 covers
+    // 11:40–12:10 only, so 12:10–13:40 (90 min) is a gap; 13:40 covers 13:40–14:10.
+    const primary = [...series(0, 10, Array(7).fill(5)), ...series(250, 10, Array(5).fill(5))];
+    const backup = [...series(10, 30, [5, 5, 5, 5]), ...series(220, 30, [5, 5])];
+    const readings = new Map([[1, fridgeExposureReadings(primary, backup)]]);
+    const result = lotExposure(input({ stays: [{ fridgeId: 1, from: at(0), to: at(300) }], readings }));
+    expect(result.unknown).to.deep.equal([{ fridgeId: 1, start: at(130), end: at(220), minutes: 90, reason: 'gap' }]);
+    expect(result.minutesUnknown).to.equal(90);
+    expect(result.minutesAbove + result.minutesBelow).to.equal(0);
   });
 
   it('a stay still open ends at asOf', () => {
