@@ -16,8 +16,11 @@ export async function addBirdCount(context: AppContext, actorId: number, flockId
     if (!flock) throw AppError.notFound('No such flock.');
     const house = await House.findByPk(flock.houseId, { include: [{ model: Site, as: 'site' }], transaction });
     const field = (message: string) => [{ field: 'countedOn', message }];
+    const today = siteToday(house!.site!);
+    // Before placement there are no birds on the farm to count or lose.
+    if (flock.placementDate > today) throw AppError.conflict(`This flock is not placed yet: it is placed on ${flock.placementDate}.`, field(`Not placed until ${flock.placementDate}.`));
     if (input.countedOn < flock.placementDate) throw AppError.badRequest('The flock was not placed yet on that day.', field(`Placed on ${flock.placementDate}.`));
-    if (input.countedOn > siteToday(house!.site!)) throw AppError.badRequest('Bird numbers are recorded on or after the day.', field('Not in the future.'));
+    if (input.countedOn > today) throw AppError.badRequest('Bird numbers are recorded on or after the day.', field('Not in the future.'));
     if (flock.depletedOn && input.countedOn > flock.depletedOn) throw AppError.badRequest('The flock was depleted by then.', field(`Depleted on ${flock.depletedOn}.`));
     const counts = (await BirdCount.findAll({ where: { flockId }, transaction })).map((count) => count.get({ plain: true }));
     const candidate = { id: Number.MAX_SAFE_INTEGER, countedOn: input.countedOn, kind: input.kind, birds: input.birds };

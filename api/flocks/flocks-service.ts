@@ -95,8 +95,13 @@ export async function depleteFlock(context: AppContext, actorId: number, id: num
   return context.sequelize.transaction(async (transaction) => {
     const flock = await lockOpenFlock(id, transaction);
     const house = await House.findByPk(flock.houseId, { include: [{ model: Site, as: 'site' }], transaction });
+    const today = siteToday(house!.site!);
+    // A flock that never came in has no birds to take out: its dates are changed with the flock instead.
+    if (flock.placementDate > today) {
+      throw AppError.conflict(`This flock is not placed yet: it is placed on ${flock.placementDate}.`, [{ field: 'depletedOn', message: `Not placed until ${flock.placementDate}.` }]);
+    }
     if (depletedOn < flock.placementDate) throw AppError.badRequest('Depletion cannot come before placement.', [{ field: 'depletedOn', message: `Placed on ${flock.placementDate}.` }]);
-    if (depletedOn > siteToday(house!.site!)) throw AppError.badRequest('Record a depletion on or after the day it happens.', [{ field: 'depletedOn', message: 'Not in the future.' }]);
+    if (depletedOn > today) throw AppError.badRequest('Record a depletion on or after the day it happens.', [{ field: 'depletedOn', message: 'Not in the future.' }]);
     const before = flock.get({ plain: true });
     await withConstraintConflicts(() => flock.update({ depletedOn }, { transaction }), stayConflicts);
     const [cancelled] = await Vaccination.update(

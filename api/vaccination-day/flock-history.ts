@@ -58,6 +58,11 @@ export async function flockHistory(context: AppContext, flockId: number): Promis
   return { flock, site, rows };
 }
 
+/** The route of the vaccination as given (copied from the product or its programme step), as the row's heading shows it. */
+function usesSprayer(route: string): boolean {
+  return route === 'spray';
+}
+
 export async function flockHistoryCsv(context: AppContext, flockId: number): Promise<{ fileName: string; csv: string }> {
   const { flock, rows } = await flockHistory(context, flockId);
   return { fileName: `vaccinations-${flock.name.replace(/[^A-Za-z0-9-]+/g, '-')}.csv`, csv: historyCsv(rows) };
@@ -75,9 +80,10 @@ export async function flockHistoryPdf(context: AppContext, flockId: number, now 
     doc.font(pdfFonts.regular).fontSize(11)
       .text(`Birds vaccinated: ${row.birdsVaccinated.toLocaleString('en-US')}    From ${time(row.startedAt)} to ${time(row.endedAt)}`)
       .text(`Lots: ${row.lots.map((l) => `${l.lotNumber} (${l.vialsUsed} vials used, ${l.dosesUsed.toLocaleString('en-US')} doses; ${l.vialsReturned} returned)`).join('; ') || 'none'}`)
-      .text(`Crew lead: ${row.crewLead}${row.crew.length ? `; crew: ${row.crew.join(', ')}` : ''}`)
-      .text(`Cleaning: ${Object.entries(cleaningItems).map(([item, label]) => `${label}: ${row.cleaning[item] ? 'done' : 'NOT done'}`).join('; ')}`)
-      .text(`Deviations: ${row.deviations || 'none'}`)
+      .text(`Crew lead: ${row.crewLead}${row.crew.length ? `; crew: ${row.crew.join(', ')}` : ''}`);
+    // The cleaning checklist is the sprayer's: a vaccination by any other route used none, so "NOT done" would be false.
+    if (usesSprayer(row.route)) doc.text(`Sprayer cleaning: ${Object.entries(cleaningItems).map(([item, label]) => `${label}: ${row.cleaning[item] ? 'done' : 'NOT done'}`).join('; ')}`);
+    doc.text(`Deviations: ${row.deviations || 'none'}`)
       .text(`Signed by ${row.crewLead} on ${time(row.signedAt)}: "${recordSignatureMeaning}"`);
   }
   addPageFooters(doc, `Vaccination record · flock ${flock.name}`, { at: now, timeZone: site.timeZone });

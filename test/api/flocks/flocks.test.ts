@@ -83,6 +83,32 @@ describe('flocks', () => {
     expect(future.body.error.fields[0].field).to.equal('countedOn');
   });
 
+  it('refuses bird numbers and a depletion for a flock not placed yet (409 naming the date field), and takes them from the placement day', async () => {
+    const { site, house, buyer } = await setUp();
+    // Placed in 5 days on the site's calendar: no birds on the farm until then.
+    const flock = await createFlock(house, { hatchDays: 3, placementDays: 5, birds: 18_000 });
+    const birds = (countedOn: string) => buyer.agent.post(`/api/flocks/${flock.id}/bird-counts`).set('X-XSRF-TOKEN', buyer.csrf).send({ countedOn, kind: 'mortality', birds: 10 });
+    const deplete = (depletedOn: string) => buyer.agent.post(`/api/flocks/${flock.id}/depletion`).set('X-XSRF-TOKEN', buyer.csrf).send({ depletedOn });
+    for (const day of [siteDay(site), siteDay(site, 5)]) {
+      const refused = await birds(day);
+      expect(refused.status, day).to.equal(409);
+      expect(refused.body.error.message).to.equal(`This flock is not placed yet: it is placed on ${siteDay(site, 5)}.`);
+      expect(refused.body.error.fields).to.deep.equal([{ field: 'countedOn', message: `Not placed until ${siteDay(site, 5)}.` }]);
+      const early = await deplete(day);
+      expect(early.status, day).to.equal(409);
+      expect(early.body.error.fields[0].field).to.equal('depletedOn');
+    }
+    const view = (await buyer.agent.get(`/api/flocks/${flock.id}`).expect(200)).body;
+    expect(view.status).to.equal('planned');
+    expect(view.birdCounts).to.deep.equal([]);
+    expect(view.depletedOn).to.equal(null);
+    expect(await AuditEntry.count({ where: { action: ['flock.bird_count', 'flock.deplete'] } })).to.equal(0);
+    // On the placement day the same writes go through.
+    await flock.update({ hatchDate: siteDay(site, -2), placementDate: siteDay(site) });
+    expect((await birds(siteDay(site))).status).to.equal(201);
+    expect((await deplete(siteDay(site))).status).to.equal(200);
+  });
+
   it('moves untouched generated vaccinations with a new hatch date and leaves a hand-moved one where it was', async () => {
     const { site, house, product, buyer } = await setUp();
     const programme = await createProgramme([{ product, ageValue: 100 }, { product, ageValue: 120 }]);

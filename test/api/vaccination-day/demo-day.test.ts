@@ -1,10 +1,18 @@
 // The demo's vaccination day (database/seeders/demo-vaccination-day.ts): what `npm start` shows the crew lead and the veterinarian.
 import { expect } from 'chai';
+import type { Test } from 'supertest';
 import { demoAccounts } from '../../../database/seeders/demo-scenario.js';
 import { Flock, Site } from '../../../database/models/index.js';
 import { signIn } from '../../support/test-app.js';
 import { seedDemoForSuite } from '../../support/demo-seed.js';
 import { siteDay } from '../../support/flock-fixtures.js';
+import { pdfText } from '../../support/pdf-pages.js';
+
+const binary = ((res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => done(null, Buffer.concat(chunks)));
+}) as unknown as Parameters<Test['parse']>[0];
 
 const account = (email: string) => demoAccounts.find((a) => a.email === email)!;
 
@@ -37,8 +45,12 @@ describe('demo data: the vaccination day', function () {
     const lines = csv.text.trim().split(/\r?\n/);
     expect(lines).to.have.length(2);
     expect(lines[1]).to.include('Fernhollow IB drinking-water vaccine').and.include('FIB1203').and.include('Joel Brandt');
-    const pdf = await agent.agent.get(`/api/vaccination-day/flocks/${flock.id}/history.pdf`).expect(200);
+    const pdf = await agent.agent.get(`/api/vaccination-day/flocks/${flock.id}/history.pdf`).buffer(true).parse(binary).expect(200);
     expect(pdf.headers['content-type']).to.match(/application\/pdf/);
+    // A drinking-water vaccination: the sprayer's cleaning steps do not belong in its record.
+    const text = pdfText(pdf.body as Buffer).replace(/\s+/g, ' ');
+    expect(text).to.include('(drinking water)');
+    expect(text).to.not.include('Sprayer').and.not.include('NOT done');
     const leads = await agent.agent.get(`/api/vaccination-day/leads?day=${siteDay((await Site.findOne({ where: { code: 'FCP' } }))!, 0)}`).expect(200);
     expect(leads.body.items.map((l: { name: string }) => l.name)).to.deep.equal(['Joel Brandt']);
   });

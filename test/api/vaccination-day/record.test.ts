@@ -184,4 +184,24 @@ describe('vaccination day: the record', () => {
     expect(rows).to.have.length(2);
     expect(rows[1]).to.include(`,spray,100,9450,${day.lot.lotNumber},10,10000,1,`);
   });
+
+  it('prints the sprayer cleaning steps only for a spray vaccination, not for one by drinking water', async () => {
+    const day = await setUpDay();
+    await runDay(day);
+    await post(day, 'record', { birdsVaccinated: 9450, cleaning: { ...cleaning, washed: false }, lots: [{ lotId: day.lot.id, vialsUsed: 10 }], password: testPassword }).expect(201);
+    const flockId = (await Vaccination.findByPk(day.vaccination.id))!.flockId;
+    const historyText = async (artifact: string) => {
+      const pdf = (await day.lead.agent.get(`/api/vaccination-day/flocks/${flockId}/history.pdf`).buffer(true).parse(binary).expect(200)).body as Buffer;
+      mkdirSync(artifacts, { recursive: true });
+      writeFileSync(join(artifacts, artifact), pdf);
+      return pdfText(pdf).replace(/\s+/g, ' ');
+    };
+    const sprayed = await historyText('flock-record-spray.pdf');
+    expect(sprayed).to.include('Sprayer cleaning: Sprayer taken apart: done').and.include('Washed with mild detergent and water, no disinfectant: NOT done');
+    // The same signed record as a drinking-water vaccination: no sprayer was used, so no sprayer step may read "NOT done".
+    await Vaccination.update({ route: 'drinking_water' }, { where: { id: day.vaccination.id } });
+    const watered = await historyText('flock-record-drinking-water.pdf');
+    expect(watered).to.include('(drinking water)').and.include('Birds vaccinated: 9,450');
+    expect(watered).to.not.include('Sprayer').and.not.include('NOT done').and.not.include('Tank dried');
+  });
 });
