@@ -46,6 +46,11 @@ describe('tables on a phone in Chromium', () => {
       // The content pane scrolls, not the page: a shot of one part at a time shows it.
       await page.locator('table.lots').first().screenshot({ path: screenshotPath('phone-review-lots') });
       await expectFitsPhone(page, 'review', decide);
+      // The embedded chart loads once scrolled to; its range choices wrap onto a second row instead of running off the screen.
+      const ranges = page.locator('mat-button-toggle-group[aria-label="Chart range"] button');
+      await page.getByRole('link', { name: 'Excursion report (PDF)' }).first().scrollIntoViewIfNeeded();
+      await ranges.first().waitFor();
+      await expectFitsPhone(page, 'review chart ranges', ranges, { pageToo: false });
       // Stacked: the product cell spans the card, so the name takes at most two lines, not one word a line.
       const productCell = page.locator('table.lots td[data-label="Product"]').first();
       const cell = (await productCell.boundingBox())!;
