@@ -3,6 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { Flock, House, Site } from '../../database/models/index.js';
 import { cleaningItems } from '../../shared/vaccination-day/day-schemas.js';
 import { historyCsv, type HistoryRow } from '../../shared/vaccination-day/history-csv.js';
+import { usesSprayer } from '../../shared/vaccination-day/sprayer.js';
 import type { AppContext } from '../app-context.js';
 import { AppError } from '../http/app-error.js';
 import { addPageFooters, createPdf, pdfFonts, pdfToBuffer } from '../pdf/pdf-document.js';
@@ -56,11 +57,6 @@ export async function flockHistory(context: AppContext, flockId: number): Promis
     cleaning: r.cleaning,
   }));
   return { flock, site, rows };
-}
-
-/** The route of the vaccination as given (copied from the product or its programme step), as the row's heading shows it. */
-function usesSprayer(route: string): boolean {
-  return route === 'spray';
 }
 
 export async function flockHistoryCsv(context: AppContext, flockId: number): Promise<{ fileName: string; csv: string }> {

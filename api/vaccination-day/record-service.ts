@@ -1,8 +1,9 @@
-// The sprayer trial, each mixing, and the record of what was given: reconciled per lot and signed by the crew lead.
+// The sprayer trial (spray only), each mixing, and the record of what was given: reconciled per lot and signed by the crew lead.
 import { QueryTypes } from 'sequelize';
 import { User, Vaccination } from '../../database/models/index.js';
 import type { RecordInput, SprayerTrialInput } from '../../shared/vaccination-day/day-schemas.js';
 import type { RunView } from '../../shared/vaccination-day/day-views.js';
+import { noSprayerText, usesSprayer } from '../../shared/vaccination-day/sprayer.js';
 import { reconcileVials } from '../../shared/vaccination-day/vial-returns.js';
 import type { AppContext } from '../app-context.js';
 import { recordAudit } from '../audit/record-audit.js';
@@ -16,6 +17,7 @@ export async function recordTrial(context: AppContext, actorId: number, vaccinat
     const vaccination = await Vaccination.findByPk(vaccinationId, { transaction });
     if (!vaccination) throw AppError.notFound('No such vaccination.');
     if (vaccination.status !== 'confirmed') throw AppError.conflict(`This vaccination is ${vaccination.status}.`);
+    if (!usesSprayer(vaccination.route)) throw AppError.conflict(noSprayerText(vaccination.route), [{ field: 'trial', message: 'No sprayer to try.' }]);
     await context.sequelize.query(
       `INSERT INTO sprayer_trials (vaccination_id, result, nozzle_height_cm, walking_pace_m_per_min, notes, recorded_by)
        VALUES (:vaccinationId, :result, :nozzleHeightCm, :walkingPaceMPerMin, :notes, :actorId)`,
@@ -51,7 +53,11 @@ export async function signRecord(context: AppContext, signerId: number, vaccinat
     const view = await loadRunView(context, vaccinationId, { transaction, plan: new Map() });
     if (!view.crew || view.crew.leadId !== signerId) throw AppError.forbidden('Only the crew lead of this day signs the record.');
     if (!view.startedAt) throw AppError.conflict('This vaccination never started.');
-    if (!view.trial) throw AppError.conflict('Record the sprayer trial first.', [{ field: 'trial', message: 'No trial recorded.' }]);
+    // The trial and the cleaning are the sprayer's: asked of a spray vaccination, never of one by water, eye drop or the like.
+    const sprayed = usesSprayer(vaccination.route);
+    if (sprayed && !view.trial) throw AppError.conflict('Record the sprayer trial first.', [{ field: 'trial', message: 'No trial recorded.' }]);
+    if (sprayed && !input.cleaning) throw AppError.unprocessable('Say which of the sprayer cleaning steps were done.', [{ field: 'cleaning', message: 'Tick the steps done.' }]);
+    const cleaning = sprayed ? input.cleaning! : {};
     const endedAt = input.endedAt ? new Date(input.endedAt) : new Date();
     if (endedAt < new Date(view.startedAt)) throw AppError.unprocessable('The end is before the start.', [{ field: 'endedAt', message: 'Before the start.' }]);
     input.lots.forEach((entry, i) => {
@@ -78,7 +84,7 @@ export async function signRecord(context: AppContext, signerId: number, vaccinat
       {
         replacements: {
           vaccinationId, startedAt: view.startedAt, endedAt, birds: input.birdsVaccinated, crew: JSON.stringify(crew), deviations: input.deviations,
-          cleaning: JSON.stringify(input.cleaning), signerId, signerName: signer.name, meaning: recordSignatureMeaning,
+          cleaning: JSON.stringify(cleaning), signerId, signerName: signer.name, meaning: recordSignatureMeaning,
         },
         transaction,
       },
@@ -91,7 +97,7 @@ export async function signRecord(context: AppContext, signerId: number, vaccinat
       );
     }
     await vaccination.update({ status: 'done' }, { transaction });
-    await recordAudit({ actorId: signerId, action: 'vaccination.record', entity: 'vaccination', entityId: vaccinationId, before: { status: 'confirmed' }, after: { recordId, birds: input.birdsVaccinated, lines, cleaning: input.cleaning, deviations: input.deviations } }, transaction);
+    await recordAudit({ actorId: signerId, action: 'vaccination.record', entity: 'vaccination', entityId: vaccinationId, before: { status: 'confirmed' }, after: { recordId, birds: input.birdsVaccinated, lines, cleaning, deviations: input.deviations } }, transaction);
   });
   return loadRunView(context, vaccinationId);
 }

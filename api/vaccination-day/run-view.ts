@@ -49,7 +49,7 @@ export async function loadRunView(context: AppContext, vaccinationId: number, op
     crew: crew && { leadId: crew.leadId, leadName: crew.leadName, members: crew.members },
     checks,
     blockers: crew
-      ? startBlockers(crewMemberIds(crew), checks.map((c) => ({ id: c.id, kind: c.kind, memberId: c.memberId, passed: c.passed, overridden: c.override !== null })))
+      ? startBlockers(crewMemberIds(crew), checks.map((c) => ({ id: c.id, kind: c.kind, memberId: c.memberId, passed: c.passed, overridden: c.override !== null })), vaccination.route)
       : [],
     ...progress,
     useBy: useBy === null ? null : new Date(useBy).toISOString(),

@@ -103,7 +103,8 @@ export const recordSchema = z.object({
   endedAt: instant.optional(),
   birdsVaccinated: z.number({ message: 'Enter the birds vaccinated.' }).int().min(0).max(10_000_000),
   deviations: z.string().trim().max(4000).default(''),
-  cleaning: z.object({ disassembled: z.boolean(), washed: z.boolean(), tankDried: z.boolean(), batteryRecharging: z.boolean() }),
+  /** The sprayer's cleaning steps: asked of a spray vaccination only (the service checks the route). */
+  cleaning: z.object({ disassembled: z.boolean(), washed: z.boolean(), tankDried: z.boolean(), batteryRecharging: z.boolean() }).optional(),
   lots: z.array(z.object({ lotId: id('Choose the lot.'), vialsUsed: z.number().int().min(0).max(10000) })).max(50),
   password: z.string({ message: 'Enter your password to sign.' }).min(1, 'Enter your password to sign.').max(1024),
 });

@@ -4,3 +4,4 @@ export { twelveHourRule, QUARANTINE_HOURS, type FarmVisit, type QuarantineResult
 export { waterVolumeMl, useByInstant, msLeft, type MixInput } from './mixing.js';
 export { checkReturn, reconcileVials, type ReturnCheck, type Reconciliation } from './vial-returns.js';
 export { heatAdvice, type HeatAdvice } from './heat-advice.js';
+export { usesSprayer, noSprayerText } from './sprayer.js';

@@ -3,6 +3,11 @@ export const memberCheckKinds = ['twelve_hour', 'hygiene', 'ppe'] as const;
 export const vaccinationCheckKinds = ['flock_health', 'withdrawal', 'water_treatments', 'heat', 'battery', 'enough_vaccine'] as const;
 export const readinessKinds = [...memberCheckKinds, ...vaccinationCheckKinds] as const;
 
+/** The vaccination's checks for its route: the sprayer's battery matters only when a sprayer is used. */
+export function vaccinationCheckKindsFor(route: string): readonly VaccinationCheckKind[] {
+  return route === 'spray' ? vaccinationCheckKinds : vaccinationCheckKinds.filter((kind) => kind !== 'battery');
+}
+
 export type MemberCheckKind = (typeof memberCheckKinds)[number];
 export type VaccinationCheckKind = (typeof vaccinationCheckKinds)[number];
 export type ReadinessKind = (typeof readinessKinds)[number];

@@ -1,6 +1,6 @@
 // Decides each readiness check from what the crew entered and what Vialyard knows; and what still blocks the start.
 import { heatAdvice } from './heat-advice.js';
-import { attestations, memberCheckKinds, vaccinationCheckKinds, type ReadinessKind } from './readiness-kinds.js';
+import { attestations, memberCheckKinds, vaccinationCheckKindsFor, type ReadinessKind } from './readiness-kinds.js';
 import { twelveHourRule, type FarmVisit } from './twelve-hour-rule.js';
 
 export interface CheckOutcome {
@@ -79,14 +79,15 @@ export interface Blocker {
 
 /**
  * What keeps a vaccination from starting: every crew member's own checks and the vaccination's checks must be
- * recorded, and the latest of each passed or overridden by a veterinarian. `checks` are newest last.
+ * recorded, and the latest of each passed or overridden by a veterinarian. `checks` are newest last. The route decides
+ * which of the vaccination's checks apply (no sprayer battery for drinking water).
  */
-export function startBlockers(memberIds: readonly number[], checks: readonly RecordedCheck[]): Blocker[] {
+export function startBlockers(memberIds: readonly number[], checks: readonly RecordedCheck[], route = 'spray'): Blocker[] {
   const latest = new Map<string, RecordedCheck>();
   for (const check of checks) latest.set(`${check.kind}:${check.memberId ?? ''}`, check);
   const wanted = [
     ...memberIds.flatMap((memberId) => memberCheckKinds.map((kind) => ({ kind, memberId }))),
-    ...vaccinationCheckKinds.map((kind) => ({ kind, memberId: null })),
+    ...vaccinationCheckKindsFor(route).map((kind) => ({ kind, memberId: null })),
   ];
   return wanted.flatMap(({ kind, memberId }): Blocker[] => {
     const check = latest.get(`${kind}:${memberId ?? ''}`);

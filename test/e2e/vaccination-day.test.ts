@@ -138,6 +138,51 @@ describe('the vaccination day in Chromium (phone)', () => {
     await context.close();
   });
 
+  it('a drinking-water vaccination asks for no sprayer trial or sprayer cleaning, and signs without them', async function () {
+    this.timeout(90_000);
+    const site = await createSite('BROOK');
+    const fridge = await createSiteFridge(site);
+    const product = await createProduct({ name: 'Water vaccine B' });
+    await stockLot(fridge, await createPresentation(product, 1000), 20, siteDay(site, 200), { lotNumber: 'WB2201' });
+    const flock = await createFlock(await createHouse(site, 'House 5'), { name: 'Broilers 8', birds: 9_000, hatchDays: -14, placementDays: -13 });
+    const vaccination = await createVaccination(flock, product, siteDay(site, 0), 'confirmed');
+    await vaccination.update({ route: 'drinking_water' });
+    const lead = await createTestUser({ email: 'water-lead@test.example', roles: ['crew'], sites: [site] });
+    const sql = suite.server.context.sequelize;
+    // Already started (the checks are covered above): the page goes straight to vials and the record.
+    await sql.query('INSERT INTO crew_assignments (site_id, day, lead_id, assigned_by) VALUES (:siteId, :day, :leadId, :leadId)', { replacements: { siteId: site.id, day: siteDay(site, 0), leadId: lead.id } });
+    await sql.query('INSERT INTO vaccination_starts (vaccination_id, started_by) VALUES (:id, :leadId)', { replacements: { id: vaccination.id, leadId: lead.id } });
+
+    const context = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 390, height: 844 }, timezoneId: site.timeZone, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await page.goto(`${suite.server.url}/`);
+    await page.getByLabel('E-mail').fill('water-lead@test.example');
+    await page.getByLabel('Password', { exact: true }).fill(testPassword);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Today\'s vaccinations' }).waitFor();
+    await page.goto(`${suite.server.url}/vaccination-day/${vaccination.id}`);
+    await page.getByRole('heading', { name: '2. Sprayer trial' }).waitFor();
+    await page.locator('vy-run-trial').getByText('No sprayer for a drinking water vaccination.').waitFor();
+    expect(await page.getByRole('button', { name: 'Record the trial' }).count(), 'no trial asked').to.equal(0);
+    await page.getByLabel('Or the lot number').fill('WB2201');
+    await page.getByLabel('Vials', { exact: true }).fill('9');
+    await page.getByRole('button', { name: 'Take out' }).click();
+    await page.getByText('Lot WB2201: 9 issued, 0 returned').waitFor();
+    await page.locator('vy-run-record').getByText('No sprayer for a drinking water vaccination. No sprayer cleaning to record.').waitFor();
+    expect(await page.getByRole('checkbox', { name: 'Sprayer taken apart' }).count(), 'no sprayer cleaning asked').to.equal(0);
+    // The cautions stay for every route.
+    await page.getByText('Follow the label and the veterinarian.').waitFor();
+    await page.getByText(/^Wear protective equipment/).waitFor();
+    await page.getByLabel('Your password, to sign').fill(testPassword);
+    await expectAccessible(page, 'drinking-water record');
+    await page.getByRole('heading', { name: '6. Record and sign' }).scrollIntoViewIfNeeded();
+    await page.screenshot({ path: screenshotPath('vaccination-day-drinking-water-record'), fullPage: true });
+    await page.getByRole('button', { name: 'Sign the record' }).click();
+    await page.getByText(/9000 birds vaccinated\. This vaccination is done\./).waitFor();
+    expect((await Vaccination.findByPk(vaccination.id))!.status).to.equal('done');
+    await context.close();
+  });
+
   it('a veterinarian overrides a failed heat check with a reason and enters the label’s water volume', async function () {
     this.timeout(90_000);
     const site = await createSite('VALE');

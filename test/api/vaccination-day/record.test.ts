@@ -112,6 +112,36 @@ describe('vaccination day: the record', () => {
     expect(lines).to.deep.equal([{ record_id: 1, lot_id: day.lot.id, vials_issued: 11, vials_used: 10, vials_returned: 1, doses_used: 10_000 }]);
   });
 
+  it('signs a drinking-water vaccination with no sprayer trial and no sprayer cleaning; a spray one still needs both', async () => {
+    const watered = await setUpDay({ code: 'WATER' });
+    await Vaccination.update({ route: 'drinking_water' }, { where: { id: watered.vaccination.id } });
+    await startDay(watered);
+    const trial = await post(watered, 'trial', { result: 'acceptable', nozzleHeightCm: 80, walkingPaceMPerMin: 18 });
+    expect(trial.status, 'no sprayer to try').to.equal(409);
+    expect(trial.body.error.message).to.equal('No sprayer for a drinking water vaccination.');
+    await post(watered, 'issues', { lotNumber: watered.lot.lotNumber, vials: 10 }).expect(201);
+    await post(watered, 'mixings').expect(201);
+    const signed = await post(watered, 'record', { birdsVaccinated: 9450, lots: [{ lotId: watered.lot.id, vialsUsed: 10 }], password: testPassword });
+    expect(signed.status, JSON.stringify(signed.body)).to.equal(201);
+    expect(signed.body.status).to.equal('done');
+    expect(signed.body.trial).to.equal(null);
+    const [stored] = await testContext().sequelize.query<{ cleaning: object }>('SELECT cleaning FROM vaccination_records WHERE vaccination_id = :id', { replacements: { id: watered.vaccination.id }, type: QueryTypes.SELECT });
+    expect(stored!.cleaning, 'no sprayer steps kept for a route without a sprayer').to.deep.equal({});
+
+    const sprayed = await setUpDay({ code: 'SPRAY' });
+    await startDay(sprayed);
+    await post(sprayed, 'issues', { lotNumber: sprayed.lot.lotNumber, vials: 10 }).expect(201);
+    const record = (body: object = {}) => post(sprayed, 'record', { birdsVaccinated: 9450, cleaning, lots: [{ lotId: sprayed.lot.id, vialsUsed: 10 }], password: testPassword, ...body });
+    const noTrial = await record();
+    expect(noTrial.status, 'a spray record needs its trial').to.equal(409);
+    expect(noTrial.body.error.fields[0].field).to.equal('trial');
+    await post(sprayed, 'trial', { result: 'acceptable', nozzleHeightCm: 80, walkingPaceMPerMin: 18 }).expect(201);
+    const noCleaning = await record({ cleaning: undefined });
+    expect(noCleaning.status, 'a spray record needs its cleaning steps').to.equal(422);
+    expect(noCleaning.body.error.fields[0].field).to.equal('cleaning');
+    expect((await record()).status).to.equal(201);
+  });
+
   it('leaves a ledger that balances after the day: received − issued + returned − discarded ± adjustments = on hand', async () => {
     const day = await setUpDay({ vials: 30 });
     await runDay(day);

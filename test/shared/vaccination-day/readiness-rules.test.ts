@@ -60,6 +60,16 @@ describe('readiness rules', () => {
     expect(startBlockers([1], [...passedAll(1), ...vaccinationChecks, failedLater])).to.deep.equal([{ kind: 'heat', memberId: null, why: 'failed' }]);
     expect(startBlockers([1], [...passedAll(1), ...vaccinationChecks, { ...failedLater, overridden: true }])).to.deep.equal([]);
   });
+
+  // Our own rule: the sprayer battery is checked only when a sprayer is used.
+  it('asks for the sprayer battery only for a spray vaccination', () => {
+    const member: RecordedCheck[] = (['twelve_hour', 'hygiene', 'ppe'] as const).map((kind, i) => ({ id: 10 + i, kind, memberId: 1, passed: true, overridden: false }));
+    const withoutBattery: RecordedCheck[] = (['flock_health', 'withdrawal', 'water_treatments', 'heat', 'enough_vaccine'] as const).map((kind, i) => ({
+      id: 100 + i, kind, memberId: null, passed: true, overridden: false,
+    }));
+    expect(startBlockers([1], [...member, ...withoutBattery], 'drinking_water')).to.deep.equal([]);
+    expect(startBlockers([1], [...member, ...withoutBattery], 'spray')).to.deep.equal([{ kind: 'battery', memberId: null, why: 'missing' }]);
+  });
 });
 
 describe('flock history CSV', () => {

@@ -4,7 +4,7 @@ import { firstValueFrom } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { memberCheckKinds, readinessLabels, vaccinationCheckKinds, type ReadinessKind } from '@shared/vaccination-day/readiness-kinds.js';
+import { memberCheckKinds, readinessLabels, vaccinationCheckKindsFor, type ReadinessKind } from '@shared/vaccination-day/readiness-kinds.js';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ApiError } from '../../core/http/api-error';
 import { StatusChip } from '../../shared/flocks/status-chip';
@@ -48,7 +48,7 @@ export class RunChecks {
     const people = [{ id: run.crew.leadId, name: run.crew.leadName }, ...run.crew.members];
     return [
       ...people.flatMap((p) => memberCheckKinds.map((kind) => ({ key: `${kind}:${p.id}`, kind, memberId: p.id, who: p.name, latest: latest(kind, p.id) }))),
-      ...vaccinationCheckKinds.map((kind) => ({ key: kind, kind, memberId: null, who: '', latest: latest(kind, null) })),
+      ...vaccinationCheckKindsFor(run.route).map((kind) => ({ key: kind, kind, memberId: null, who: '', latest: latest(kind, null) })),
     ];
   });
 

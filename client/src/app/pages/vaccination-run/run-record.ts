@@ -1,10 +1,11 @@
-// The record: birds vaccinated, vials used per lot (issued = used + returned), deviations, the cleaning checklist, signed by the crew lead.
-import { ChangeDetectionStrategy, Component, effect, inject, untracked } from '@angular/core';
+// The record: birds vaccinated, vials used per lot (issued = used + returned), deviations, the sprayer's cleaning checklist (spray only), signed by the crew lead.
+import { ChangeDetectionStrategy, Component, computed, effect, inject, untracked } from '@angular/core';
 import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
+import { noSprayerText, usesSprayer } from '@shared/vaccination-day/sprayer.js';
 import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
 import { RunStep } from './run-step';
 
@@ -30,6 +31,7 @@ import { RunStep } from './run-step';
             }
           </div>
           @if (form.controls.lots.invalid) { <p class="form-error">{{ message(form.controls.lots) }}</p> }
+          @if (sprayed()) {
           <fieldset formGroupName="cleaning">
             <legend>Cleaning</legend>
             <mat-checkbox formControlName="disassembled">Sprayer taken apart</mat-checkbox>
@@ -37,6 +39,9 @@ import { RunStep } from './run-step';
             <mat-checkbox formControlName="tankDried">Tank dried</mat-checkbox>
             <mat-checkbox formControlName="batteryRecharging">Battery on charge</mat-checkbox>
           </fieldset>
+          } @else {
+            <p class="who">{{ noSprayer() }} No sprayer cleaning to record.</p>
+          }
           <mat-form-field><mat-label>Deviations</mat-label><textarea matInput rows="2" formControlName="deviations"></textarea></mat-form-field>
           <mat-form-field><mat-label>Your password, to sign</mat-label><input matInput type="password" autocomplete="current-password" formControlName="password" required />
             @if (form.controls.password.invalid) { <mat-error>{{ message(form.controls.password) }}</mat-error> }</mat-form-field>
@@ -53,6 +58,9 @@ import { RunStep } from './run-step';
 export class RunRecord extends RunStep {
   protected readonly meaning = 'I led this vaccination and this record is true and complete.';
   private readonly fb = inject(NonNullableFormBuilder);
+  // The cleaning checklist is the sprayer's: asked of a spray vaccination only.
+  protected readonly sprayed = computed(() => usesSprayer(this.run().route));
+  protected readonly noSprayer = computed(() => noSprayerText(this.run().route));
   protected readonly form = this.fb.group({
     birdsVaccinated: this.fb.control<number | null>(null, [Validators.required, Validators.min(0)]),
     lots: new FormArray<ReturnType<RunRecord['lotGroup']>>([]),
@@ -80,7 +88,7 @@ export class RunRecord extends RunStep {
   }
 
   protected sign(): void {
-    const v = this.form.getRawValue();
-    void this.send('record', { ...v, birdsVaccinated: v.birdsVaccinated }, this.form);
+    const { cleaning, ...v } = this.form.getRawValue();
+    void this.send('record', { ...v, birdsVaccinated: v.birdsVaccinated, ...(this.sprayed() ? { cleaning } : {}) }, this.form);
   }
 }

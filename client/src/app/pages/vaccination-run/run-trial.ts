@@ -1,11 +1,12 @@
-// The sprayer trial on water-sensitive paper: acceptable, or adjusted and retested; nozzle height and walking pace.
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+// The sprayer trial on water-sensitive paper (spray vaccinations only): acceptable, or adjusted and retested; nozzle height and walking pace.
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatRadioModule } from '@angular/material/radio';
 import { firstValueFrom } from 'rxjs';
+import { noSprayerText, usesSprayer } from '@shared/vaccination-day/sprayer.js';
 import { ApiError } from '../../core/http/api-error';
 import { RunStep } from './run-step';
 
@@ -15,6 +16,9 @@ import { RunStep } from './run-step';
   template: `
     <section aria-labelledby="trial-title">
       <h2 id="trial-title">2. Sprayer trial</h2>
+      @if (!sprayed()) {
+        <p>{{ noSprayer() }}</p>
+      } @else {
       @if (error(); as e) { <p class="form-error" role="alert">{{ e }}</p> }
       @if (run().trial; as t) {
         <p>{{ t.result === 'acceptable' ? 'Acceptable' : 'Adjusted and retested' }} · nozzle {{ t.nozzleHeightCm }} cm · {{ t.walkingPaceMPerMin }} m/min{{ t.notes ? ' · ' + t.notes : '' }}</p>
@@ -48,6 +52,7 @@ import { RunStep } from './run-step';
           <div><button mat-stroked-button type="submit" [disabled]="busy()">Record the trial</button></div>
         </form>
       }
+      }
     </section>
   `,
   styleUrl: './run-sections.scss',
@@ -64,6 +69,9 @@ export class RunTrial extends RunStep {
   });
 
   protected readonly again = signal(false);
+  // Only a spray vaccination has a sprayer to try; any other route skips the step.
+  protected readonly sprayed = computed(() => usesSprayer(this.run().route));
+  protected readonly noSprayer = computed(() => noSprayerText(this.run().route));
 
   protected async photo(event: Event): Promise<void> {
     const input = event.target as HTMLInputElement;
