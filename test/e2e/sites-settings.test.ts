@@ -118,8 +118,11 @@ describe('the sites page in Chromium', () => {
     // A new site starts from the schema's defaults.
     expect(await dialog.getByLabel('No recent data after (hours)').inputValue()).to.equal('24');
     expect(await dialog.getByLabel('Expiry alerts (days)').inputValue()).to.equal('30, 60, 90');
-    await dialog.getByLabel('Code').fill('ridge-2');
-    await dialog.getByLabel('Name').fill('Ridge pullets');
+    // Typing only once the dialog has finished opening: a busy machine can still be running its entry animation.
+    await page.waitForFunction(() => document.getAnimations().every((animation) => animation.playState !== 'running'));
+    await dialog.getByLabel('Code', { exact: true }).fill('ridge-2');
+    await dialog.getByLabel('Name', { exact: true }).fill('Ridge pullets');
+    expect(await dialog.getByLabel('Code', { exact: true }).inputValue(), 'the code as typed').to.equal('ridge-2');
     await dialog.getByLabel('Time zone').fill('Denver');
     await page.getByRole('option', { name: 'America/Denver' }).click();
     await dialog.getByLabel('No recent data after (hours)').fill('0');
