@@ -1,7 +1,7 @@
 // Instants on a site's own clock: a check done at 08:30 at the farm reads 08:30 wherever the reader's browser is.
 // Only Intl, so the client can use it without a date library. Building a formatter costs far more than using one
 // (it loads the zone's rules): one per locale, zone and style, kept.
-export type SiteTimeStyle = 'medium' | 'short' | 'time';
+export type SiteTimeStyle = 'medium' | 'short' | 'time' | 'date';
 
 const styles: Record<SiteTimeStyle, Intl.DateTimeFormatOptions> = {
   /** "Dec 4, 2026, 8:30 AM CST" */
@@ -10,6 +10,8 @@ const styles: Record<SiteTimeStyle, Intl.DateTimeFormatOptions> = {
   short: { year: '2-digit', month: 'numeric', day: 'numeric', hour: 'numeric', minute: '2-digit', timeZoneName: 'short' },
   /** "8:30 AM CST" */
   time: { hour: 'numeric', minute: '2-digit', timeZoneName: 'short' },
+  /** "Dec 4, 2026": the site's calendar day, no zone (a day needs none). */
+  date: { year: 'numeric', month: 'short', day: 'numeric' },
 };
 
 const formatters = new Map<string, Intl.DateTimeFormat>();

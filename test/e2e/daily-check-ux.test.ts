@@ -1,19 +1,13 @@
 // In Chromium: daily-check times are the fridge's site's, typed and shown with the zone's short name, whatever time zone
 // the browser is in (here Tokyo, for a site in Saskatchewan).
 import { expect } from 'chai';
-import type { Page } from 'playwright-core';
 import { DailyCheck } from '../../database/models/index.js';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFridge } from '../support/fridge-fixtures.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('daily-check times on the site’s clock in Chromium', () => {
   const suite = browserSuite();

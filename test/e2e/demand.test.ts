@@ -3,18 +3,13 @@
 import { expect } from 'chai';
 import type { BrowserContext, Page } from 'playwright-core';
 import { ProductStockSetting } from '../../database/models/index.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { caughtMail, clearCaughtMail } from '../support/mail-catcher.js';
 import { pdfText } from '../support/pdf-pages.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createFlock, createHouse, createPresentation, createProduct, createProgramme, createSupplier, createVaccination, siteDay } from '../support/flock-fixtures.js';
 import { browserSuite } from '../support/browser-suite.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 async function signIn(page: Page, baseUrl: string, email: string): Promise<void> {
   await page.goto(`${baseUrl}/`);

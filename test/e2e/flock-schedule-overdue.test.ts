@@ -3,18 +3,13 @@
 // buttons. axe runs on the page and on each dialog. Dates hand-computed from the site's today (hatch at today − 30:
 // day 14 is today − 16, week 4 today − 2, week 6 today + 12).
 import { expect } from 'chai';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext } from 'playwright-core';
 import { reconcileFlock } from '../../api/flocks/reconcile-flock.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations, signInOnPage } from '../support/browser.js';
+import { screenshotPath, signInOnPage, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFlock, createHouse, createProduct, createProgramme, siteDay } from '../support/flock-fixtures.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testContext } from '../support/test-app.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('overdue programme steps on the flock page, in Chromium', () => {
   const suite = browserSuite();

@@ -2,17 +2,12 @@
 // flocks list and the flock page show its birds as expected, not present, and offer no bird update or depletion until
 // that day. axe runs on the page. Dates hand-computed from the site's today (placed at today + 6, hatched today + 4).
 import { expect } from 'chai';
-import type { BrowserContext, Page } from 'playwright-core';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations, signInOnPage } from '../support/browser.js';
+import type { BrowserContext } from 'playwright-core';
+import { screenshotPath, signInOnPage, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFlock, createHouse, siteDay } from '../support/flock-fixtures.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser } from '../support/test-app.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('a flock not placed yet, in Chromium', () => {
   const suite = browserSuite();

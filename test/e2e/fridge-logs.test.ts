@@ -1,16 +1,11 @@
 // In Chromium: storage staff import a logger file, map its columns on the preview, see the chart and the excursion, record a check.
 import { expect } from 'chai';
 import type { BrowserContext, Page } from 'playwright-core';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { createFridge, createLogger } from '../support/fridge-fixtures.js';
 import { browserSuite } from '../support/browser-suite.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 async function signIn(page: Page, baseUrl: string, email: string): Promise<void> {
   await page.goto(`${baseUrl}/sign-in`);

@@ -2,7 +2,7 @@
 // aligned with them, expiry dates in one form — at a desktop width and on a phone.
 import { expect } from 'chai';
 import type { Page } from 'playwright-core';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFridge } from '../support/fridge-fixtures.js';
 import { createPresentation, createProduct, siteDay, stockLot } from '../support/flock-fixtures.js';
@@ -28,11 +28,6 @@ function columnBoxes(page: Page, column: string): Promise<{ header: Box | null; 
 }
 
 const close = (a: number, b: number) => Math.abs(a - b) < 0.75;
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('the lots list lines up its columns in Chromium', () => {
   const suite = browserSuite();

@@ -3,7 +3,7 @@
 import { expect } from 'chai';
 import type { Page } from 'playwright-core';
 import { ProductStockSetting } from '../../database/models/index.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations, signInOnPage } from '../support/browser.js';
+import { screenshotPath, signInOnPage, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFlock, createHouse, createPresentation, createProduct, createSupplier, createVaccination, siteDay } from '../support/flock-fixtures.js';
 import { createCatalogue, createFridge } from '../support/receiving-fixtures.js';
@@ -11,11 +11,6 @@ import { clearCaughtMail } from '../support/mail-catcher.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser } from '../support/test-app.js';
 import { expectFitsPhone, phone } from '../support/phone-layout.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 /** Every receiving-context call the page makes, and its console errors. */
 function watch(page: Page): { contextCalls: string[]; consoleErrors: string[] } {

@@ -1,8 +1,7 @@
 // In Chromium on a 390×844 phone: the review queue, the fridge page, purchase orders and users never scroll sideways,
 // each row's action buttons lie inside the screen (rows stack as cards), and axe finds nothing serious.
 import { expect } from 'chai';
-import type { Page } from 'playwright-core';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations, signInOnPage } from '../support/browser.js';
+import { screenshotPath, signInOnPage, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { expectFitsPhone, phone } from '../support/phone-layout.js';
 import { createFridge, createLogger } from '../support/fridge-fixtures.js';
@@ -10,11 +9,6 @@ import { createCatalogue, createPurchaseOrder } from '../support/receiving-fixtu
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, signInAs, testApp } from '../support/test-app.js';
 import { lotIn, MIN, productWithRange, T0, uploadTemps } from '../api/holds/hold-test-setup.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('tables on a phone in Chromium', () => {
   const suite = browserSuite();

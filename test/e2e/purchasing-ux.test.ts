@@ -1,17 +1,11 @@
 // In Chromium: a site's purchasing page lists each expiring lot once — a lot the plan leaves to expire unused shows
 // there, noting that it also falls in an expiry alert, and not again under "expiring soon".
 import { expect } from 'chai';
-import type { Page } from 'playwright-core';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFlock, createHouse, createPresentation, createProduct, createSiteFridge, createVaccination, siteDay, stockLot } from '../support/flock-fixtures.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('expiring stock on the purchasing page in Chromium', () => {
   const suite = browserSuite();

@@ -4,7 +4,7 @@
 import { expect } from 'chai';
 import type { Page } from 'playwright-core';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createCatalogue, createFridge, createPurchaseOrder } from '../support/receiving-fixtures.js';
 import { clearPhotoFiles } from '../support/receiving-state.js';
@@ -28,11 +28,6 @@ const focusedControl = (page: Page) =>
 /** The draft is saved a moment after each change; wait until it holds this many lines. */
 const draftHasLines = (page: Page, count: number) =>
   page.waitForFunction((n) => Object.keys(localStorage).some((key) => key.startsWith('vialyard.receiving-draft') && JSON.parse(localStorage.getItem(key)!).value.lines.length === n), count);
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 describe('the receiving form’s focus in Chromium', () => {
   const suite = browserSuite();

@@ -1,27 +1,14 @@
 // In Chromium on a phone-sized screen: a clerk receives a shipment with a scanned lot and a photo, and sees it listed; axe on every page.
 import { expect } from 'chai';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext } from 'playwright-core';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
 import { Hold, Lot } from '../../database/models/index.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { expectAccessible, screenshotPath, signInOnPage } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
-import { createSite, createTestUser, testPassword } from '../support/test-app.js';
+import { createSite, createTestUser } from '../support/test-app.js';
 import { createCatalogue, createFridge, createPurchaseOrder, makeJpeg } from '../support/receiving-fixtures.js';
 import { clearPhotoFiles } from '../support/receiving-state.js';
 import { browserSuite } from '../support/browser-suite.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
-
-async function signInThroughPage(page: Page, baseUrl: string, email: string): Promise<void> {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(testPassword);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { level: 1 }).filter({ hasText: /Good (morning|afternoon|evening)/ }).waitFor();
-}
 
 /** GS1 element string as a hand scanner types it: GTIN, expiry YYMMDD, then the lot last (no separator needed). */
 function scanData(gtin: string, expiry: string, lot: string): string {
@@ -50,7 +37,7 @@ describe('receiving in Chromium', () => {
   it('a clerk on a phone receives the expected shipment with a scanned lot and a photo, and sees it listed', async () => {
     const { order } = await scene();
     const page = await context.newPage();
-    await signInThroughPage(page, suite.server.url, 'clerk@test.example');
+    await signInOnPage(page, suite.server.url, 'clerk@test.example');
     await page.getByRole('link', { name: 'Open receiving' }).click();
     await page.getByRole('heading', { name: 'Due today and overdue' }).waitFor();
     await page.getByText(`Order ${order.reference}`).waitFor();
@@ -98,7 +85,7 @@ describe('receiving in Chromium', () => {
   it('the draft survives a reload, photo included, and a warm reading shows the hold before sending', async () => {
     const { site, order } = await scene();
     const page = await context.newPage();
-    await signInThroughPage(page, suite.server.url, 'clerk@test.example');
+    await signInOnPage(page, suite.server.url, 'clerk@test.example');
     await page.goto(`${suite.server.url}/receiving/new?site=${site.id}&order=${order.id}`);
     await page.getByRole('button', { name: 'All checks fine' }).click();
     await page.keyboard.type('52');
@@ -133,7 +120,7 @@ describe('receiving in Chromium', () => {
   it('an unknown barcode is proposed in a dialog and used on the line at once; the camera dialog says when there is no camera', async () => {
     const { site } = await scene();
     const page = await context.newPage();
-    await signInThroughPage(page, suite.server.url, 'clerk@test.example');
+    await signInOnPage(page, suite.server.url, 'clerk@test.example');
     await page.goto(`${suite.server.url}/receiving/new?site=${site.id}`);
     await page.getByRole('button', { name: 'Camera' }).click();
     const camera = page.getByRole('dialog');
@@ -161,7 +148,7 @@ describe('receiving in Chromium', () => {
     const desk = await suite.browser.newContext({ bypassCSP: true, viewport: { width: 1280, height: 900 } });
     try {
       const page = await desk.newPage();
-      await signInThroughPage(page, suite.server.url, 'buyer@test.example');
+      await signInOnPage(page, suite.server.url, 'buyer@test.example');
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Catalogue' }).click();
       await page.getByRole('heading', { name: catalogue.product.name }).waitFor();
       await expectAccessible(page, 'catalogue');

@@ -1,15 +1,10 @@
 // In Chromium: sign in through the real page, see the shell, use the users page and the account page; axe on every page.
 import { expect } from 'chai';
 import type { BrowserContext, Page } from 'playwright-core';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
 import { browserSuite } from '../support/browser-suite.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 async function signInThroughPage(page: Page, baseUrl: string, email: string): Promise<void> {
   await page.goto(`${baseUrl}/`);

@@ -4,17 +4,12 @@
 import { expect } from 'chai';
 import type { Page } from 'playwright-core';
 import { ExposureEvent, TroubleshootingRecord } from '../../database/models/index.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createFridge, createLogger } from '../support/fridge-fixtures.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, signInAs, testApp, testPassword } from '../support/test-app.js';
 import { holdsOf, lotIn, MIN, productWithRange, uploadTemps } from '../api/holds/hold-test-setup.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 const settle = (page: Page) => page.waitForFunction(() => document.getAnimations().every((a) => a.playState !== 'running'));
 /** Intl puts a narrow no-break space before AM/PM: match any space. */

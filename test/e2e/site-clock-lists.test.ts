@@ -4,18 +4,13 @@ import { randomUUID } from 'node:crypto';
 import { expect } from 'chai';
 import type { Page } from 'playwright-core';
 import { Fridge, Shipment, StockCount } from '../../database/models/index.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createLogger } from '../support/fridge-fixtures.js';
 import { createPresentation, createProduct, stockLot } from '../support/flock-fixtures.js';
 import { createFridge } from '../support/receiving-fixtures.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 async function signIn(page: Page, url: string, email: string): Promise<void> {
   await page.goto(`${url}/sign-in`);

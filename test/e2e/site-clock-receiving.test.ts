@@ -5,18 +5,13 @@ import { expect } from 'chai';
 import type { Page } from 'playwright-core';
 import { Shipment, ShipmentLine, StockMovement } from '../../database/models/index.js';
 import { siteLocalDate } from '../../shared/receiving/site-local-date.js';
-import { describeViolations, screenshotPath, seriousAccessibilityViolations } from '../support/browser.js';
+import { screenshotPath, expectAccessible } from '../support/browser.js';
 import { browserSuite } from '../support/browser-suite.js';
 import { createPresentation, createProduct, stockLot } from '../support/flock-fixtures.js';
 import { createCatalogue, createFridge, createPurchaseOrder } from '../support/receiving-fixtures.js';
 import { clearPhotoFiles } from '../support/receiving-state.js';
 import { resetDatabase } from '../support/test-database.js';
 import { createSite, createTestUser, testPassword } from '../support/test-app.js';
-
-async function expectAccessible(page: Page, what: string): Promise<void> {
-  const violations = await seriousAccessibilityViolations(page);
-  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
-}
 
 const settle = (page: Page) => page.waitForFunction(() => document.getAnimations().every((a) => a.playState !== 'running'));
 const DAY = 86_400_000;

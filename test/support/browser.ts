@@ -1,4 +1,5 @@
 // Launches Debian's Chromium through playwright-core with flags that keep it off the network, and runs axe-core on pages.
+import { expect } from 'chai';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { existsSync, mkdirSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -69,4 +70,10 @@ export async function signInOnPage(page: Page, baseUrl: string, email: string, p
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('heading', { level: 1 }).filter({ hasText: /Good (morning|afternoon|evening)/ }).waitFor();
+}
+
+/** Fails with axe's findings when the page shows any serious or critical accessibility violation. */
+export async function expectAccessible(page: Page, what: string): Promise<void> {
+  const violations = await seriousAccessibilityViolations(page);
+  expect(violations, `${what}:\n${describeViolations(violations)}`).to.have.length(0);
 }

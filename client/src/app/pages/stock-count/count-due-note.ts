@@ -7,7 +7,7 @@ import { RouterLink } from '@angular/router';
 import { countDueReasonLabels } from '@shared/lots/count-due.js';
 import { LotStatusChip } from '../../shared/lots/lot-status-chip';
 import { LotsApi } from '../../shared/lots/lots-api';
-import { siteDayText } from './site-day';
+import { siteTimeText } from '@shared/sites/site-clock.js';
 
 @Component({
   selector: 'vy-count-due-note',
@@ -56,7 +56,7 @@ export class CountDueNote {
   /** The day on the site's calendar. */
   protected readonly lastCounted = computed(() => {
     const sheet = this.sheet.value();
-    return sheet ? siteDayText(sheet.due.lastCountAt, sheet.fridge.timeZone, this.locale) : '';
+    return sheet ? (sheet.due.lastCountAt != null ? siteTimeText(sheet.due.lastCountAt, sheet.fridge.timeZone, 'date', this.locale) : '—') : '';
   });
   protected readonly vials = computed(() => (this.sheet.value()?.lines ?? []).reduce((sum, line) => sum + line.expected, 0));
 }

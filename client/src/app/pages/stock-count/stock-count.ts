@@ -15,7 +15,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { ApiError } from '../../core/http/api-error';
 import { LotStatusChip } from '../../shared/lots/lot-status-chip';
 import { SiteTimePipe } from '../../shared/sites/site-time-pipe';
-import { siteDayText } from './site-day';
+import { siteTimeText } from '@shared/sites/site-clock.js';
 import { LotsApi, type CountSheet } from '../../shared/lots/lots-api';
 
 type LineForm = FormGroup<{ counted: FormControl<number | null>; reason: FormControl<string> }>;
@@ -83,7 +83,7 @@ export class StockCountSheet {
 
   /** The day the next count is due, on the site's calendar. */
   protected dueDay(sheet: CountSheet): string {
-    return siteDayText(sheet.due.dueAt, sheet.fridge.timeZone, this.locale);
+    return sheet.due.dueAt != null ? siteTimeText(sheet.due.dueAt, sheet.fridge.timeZone, 'date', this.locale) : '—';
   }
 
   protected dueReasons(sheet: CountSheet): string {
